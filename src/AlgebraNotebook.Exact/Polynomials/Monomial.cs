@@ -1,0 +1,308 @@
+using System.Text;
+using AlgebraNotebook.Exact.Symbols;
+
+namespace AlgebraNotebook.Exact.Polynomials;
+
+/// <summary>
+/// A power product x1^e1 ... xk^ek of symbols with positive exponents; immutable and canonical
+/// (factors sorted by <see cref="Symbol.Id"/>, no zero exponents). The empty product is <see cref="One"/>.
+/// </summary>
+public sealed class Monomial : IEquatable<Monomial>
+{
+    private readonly Symbol[] _symbols;
+    private readonly int[] _exponents;
+    private readonly int _hash;
+
+    private Monomial(Symbol[] symbols, int[] exponents)
+    {
+        _symbols = symbols;
+        _exponents = exponents;
+        var degree = 0;
+        var hash = 17;
+        for (var k = 0; k < symbols.Length; k++)
+        {
+            degree += exponents[k];
+            hash = unchecked((hash * 31 + symbols[k].Id) * 31 + exponents[k]);
+        }
+
+        TotalDegree = degree;
+        _hash = hash;
+    }
+
+    /// <summary>The empty product 1.</summary>
+    public static Monomial One { get; } = new([], []);
+
+    /// <summary>Sum of the exponents.</summary>
+    public int TotalDegree { get; }
+
+    /// <summary>True for the empty product.</summary>
+    public bool IsOne => _symbols.Length == 0;
+
+    /// <summary>Number of distinct symbols with a positive exponent.</summary>
+    public int FactorCount => _symbols.Length;
+
+    /// <summary>The factors (symbol, exponent) in increasing <see cref="Symbol.Id"/>.</summary>
+    public IEnumerable<(Symbol Symbol, int Exponent)> Factors
+    {
+        get
+        {
+            for (var k = 0; k < _symbols.Length; k++)
+            {
+                yield return (_symbols[k], _exponents[k]);
+            }
+        }
+    }
+
+    /// <summary>The symbol of the k-th factor.</summary>
+    public Symbol SymbolAt(int k) => _symbols[k];
+
+    /// <summary>The exponent of the k-th factor.</summary>
+    public int ExponentAt(int k) => _exponents[k];
+
+    /// <summary>The monomial consisting of one symbol to a power (power 0 gives <see cref="One"/>).</summary>
+    /// <exception cref="ExactArgumentException">The exponent is negative.</exception>
+    public static Monomial Of(Symbol symbol, int exponent = 1)
+    {
+        ArgumentNullException.ThrowIfNull(symbol);
+        if (exponent < 0)
+        {
+            throw new ExactArgumentException($"Exponent {exponent} of {symbol} is negative; monomials have non-negative exponents.", nameof(exponent));
+        }
+
+        return exponent == 0 ? One : new Monomial([symbol], [exponent]);
+    }
+
+    /// <summary>Builds a monomial from factors in any order; repeated symbols add their exponents, zero exponents vanish.</summary>
+    /// <exception cref="ExactArgumentException">An exponent is negative.</exception>
+    public static Monomial FromFactors(IEnumerable<(Symbol Symbol, int Exponent)> factors)
+    {
+        ArgumentNullException.ThrowIfNull(factors);
+        var collected = new SortedDictionary<int, (Symbol Symbol, int Exponent)>();
+        foreach (var (symbol, exponent) in factors)
+        {
+            if (exponent < 0)
+            {
+                throw new ExactArgumentException($"Exponent {exponent} of {symbol} is negative; monomials have non-negative exponents.", nameof(factors));
+            }
+
+            collected[symbol.Id] = collected.TryGetValue(symbol.Id, out var old) ? (symbol, old.Exponent + exponent) : (symbol, exponent);
+        }
+
+        var kept = collected.Values.Where(f => f.Exponent != 0).ToArray();
+        return kept.Length == 0 ? One : new Monomial(kept.Select(f => f.Symbol).ToArray(), kept.Select(f => f.Exponent).ToArray());
+    }
+
+    /// <summary>The exponent of <paramref name="symbol"/> (0 when absent).</summary>
+    public int ExponentOf(Symbol symbol)
+    {
+        for (var k = 0; k < _symbols.Length; k++)
+        {
+            if (ReferenceEquals(_symbols[k], symbol))
+            {
+                return _exponents[k];
+            }
+
+            if (_symbols[k].Id > symbol.Id)
+            {
+                break;
+            }
+        }
+
+        return 0;
+    }
+
+    /// <summary>The product of two monomials.</summary>
+    public static Monomial operator *(Monomial left, Monomial right)
+    {
+        if (left.IsOne)
+        {
+            return right;
+        }
+
+        if (right.IsOne)
+        {
+            return left;
+        }
+
+        return Merge(left, right, static (a, b) => a + b);
+    }
+
+    /// <summary>True when this monomial divides <paramref name="other"/>.</summary>
+    public bool Divides(Monomial other)
+    {
+        int i = 0, j = 0;
+        while (i < _symbols.Length)
+        {
+            while (j < other._symbols.Length && other._symbols[j].Id < _symbols[i].Id)
+            {
+                j++;
+            }
+
+            if (j == other._symbols.Length || !ReferenceEquals(other._symbols[j], _symbols[i]) || other._exponents[j] < _exponents[i])
+            {
+                return false;
+            }
+
+            i++;
+            j++;
+        }
+
+        return true;
+    }
+
+    /// <summary>The quotient this / divisor.</summary>
+    /// <exception cref="ExactArgumentException">The divisor does not divide this monomial.</exception>
+    public Monomial DivideBy(Monomial divisor)
+    {
+        if (!divisor.Divides(this))
+        {
+            throw new ExactArgumentException($"{divisor} does not divide {this}.", nameof(divisor));
+        }
+
+        return divisor.IsOne ? this : Merge(this, divisor, static (a, b) => a - b);
+    }
+
+    /// <summary>Least common multiple (componentwise maximum of exponents).</summary>
+    public static Monomial Lcm(Monomial left, Monomial right) => Merge(left, right, Math.Max);
+
+    /// <summary>Greatest common divisor (componentwise minimum of exponents).</summary>
+    public static Monomial Gcd(Monomial left, Monomial right) => Merge(left, right, Math.Min);
+
+    /// <summary>True when the two monomials share no symbol.</summary>
+    public static bool AreCoprime(Monomial left, Monomial right)
+    {
+        int i = 0, j = 0;
+        while (i < left._symbols.Length && j < right._symbols.Length)
+        {
+            var c = left._symbols[i].Id.CompareTo(right._symbols[j].Id);
+            if (c == 0)
+            {
+                return false;
+            }
+
+            if (c < 0)
+            {
+                i++;
+            }
+            else
+            {
+                j++;
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>This monomial to a non-negative power.</summary>
+    public Monomial Pow(int exponent)
+    {
+        if (exponent < 0)
+        {
+            throw new ExactArgumentException($"Exponent {exponent} is negative; monomials have non-negative exponents.", nameof(exponent));
+        }
+
+        if (exponent == 0)
+        {
+            return One;
+        }
+
+        return new Monomial((Symbol[])_symbols.Clone(), _exponents.Select(e => checked(e * exponent)).ToArray());
+    }
+
+    /// <summary>The monomial with <paramref name="symbol"/> removed.</summary>
+    public Monomial Without(Symbol symbol) =>
+        ExponentOf(symbol) == 0 ? this : FromFactors(Factors.Where(f => !ReferenceEquals(f.Symbol, symbol)));
+
+    private static Monomial Merge(Monomial left, Monomial right, Func<int, int, int> combine)
+    {
+        var symbols = new List<Symbol>(left._symbols.Length + right._symbols.Length);
+        var exponents = new List<int>(left._symbols.Length + right._symbols.Length);
+        int i = 0, j = 0;
+        while (i < left._symbols.Length || j < right._symbols.Length)
+        {
+            Symbol symbol;
+            int a = 0, b = 0;
+            if (j == right._symbols.Length || (i < left._symbols.Length && left._symbols[i].Id < right._symbols[j].Id))
+            {
+                symbol = left._symbols[i];
+                a = left._exponents[i++];
+            }
+            else if (i == left._symbols.Length || right._symbols[j].Id < left._symbols[i].Id)
+            {
+                symbol = right._symbols[j];
+                b = right._exponents[j++];
+            }
+            else
+            {
+                symbol = left._symbols[i];
+                a = left._exponents[i++];
+                b = right._exponents[j++];
+            }
+
+            var e = checked(combine(a, b));
+            if (e != 0)
+            {
+                symbols.Add(symbol);
+                exponents.Add(e);
+            }
+        }
+
+        return symbols.Count == 0 ? One : new Monomial(symbols.ToArray(), exponents.ToArray());
+    }
+
+    /// <inheritdoc />
+    public bool Equals(Monomial? other)
+    {
+        if (ReferenceEquals(this, other))
+        {
+            return true;
+        }
+
+        if (other is null || other._hash != _hash || other._symbols.Length != _symbols.Length)
+        {
+            return false;
+        }
+
+        for (var k = 0; k < _symbols.Length; k++)
+        {
+            if (!ReferenceEquals(_symbols[k], other._symbols[k]) || _exponents[k] != other._exponents[k])
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    /// <inheritdoc />
+    public override bool Equals(object? obj) => Equals(obj as Monomial);
+
+    /// <inheritdoc />
+    public override int GetHashCode() => _hash;
+
+    /// <summary>Plain text such as "x^2*y", or "1".</summary>
+    public override string ToString()
+    {
+        if (IsOne)
+        {
+            return "1";
+        }
+
+        var text = new StringBuilder();
+        for (var k = 0; k < _symbols.Length; k++)
+        {
+            if (k > 0)
+            {
+                text.Append('*');
+            }
+
+            text.Append(_symbols[k].Name);
+            if (_exponents[k] != 1)
+            {
+                text.Append('^').Append(_exponents[k]);
+            }
+        }
+
+        return text.ToString();
+    }
+}
