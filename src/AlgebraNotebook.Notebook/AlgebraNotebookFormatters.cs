@@ -1,0 +1,93 @@
+using System.Net;
+using System.Reflection;
+using AlgebraNotebook.Display;
+using AlgebraNotebook.Exact;
+using Microsoft.DotNet.Interactive.Formatting;
+
+namespace AlgebraNotebook.Notebook;
+
+/// <summary>
+/// Registers AlgebraNotebook's formatters with the .NET Interactive formatting library: text/html from
+/// <see cref="MathDisplay.ToHtml"/> (MathML inside an HTML fragment) and text/plain from
+/// <see cref="MathDisplay.ToPlainText"/>, with both MIME types preferred so a notebook receives both.
+/// </summary>
+/// <remarks>
+/// The formatter registry is global to the process. Generic types (Matrix&lt;T&gt;, Polynomial&lt;T&gt;, ...) are
+/// registered once as open generic type definitions, which the formatting library applies to every closed type.
+/// A value for which <see cref="MathDisplay.CanRender"/> is false falls back to its ToString(), HTML-escaped in text/html.
+/// LaTeX is not emitted as a MIME type; it is available from <see cref="MathDisplay.ToLatex"/>.
+/// </remarks>
+public static class AlgebraNotebookFormatters
+{
+    /// <summary>MIME type of the HTML formatter.</summary>
+    public const string HtmlMimeType = "text/html";
+
+    /// <summary>MIME type of the plain-text formatter.</summary>
+    public const string PlainTextMimeType = "text/plain";
+
+    private static readonly object Gate = new();
+    private static bool registered;
+
+    /// <summary>
+    /// The types that get formatters: every public, non-static class or struct of AlgebraNotebook.Exact that is not an
+    /// exception, attribute, delegate, enum or interface; generic types appear as open definitions (Matrix`1 ...).
+    /// Sorted by full name.
+    /// </summary>
+    public static IReadOnlyList<Type> RegisteredTypes { get; } = typeof(ExactArgumentException).Assembly
+        .GetExportedTypes()
+        .Where(IsFormattedType)
+        .OrderBy(t => t.FullName, StringComparer.Ordinal)
+        .ToArray();
+
+    /// <summary>
+    /// Registers the formatters and preferred MIME types for every type in <see cref="RegisteredTypes"/>. Safe to call
+    /// more than once: later calls do nothing unless the formatting library was reset in between
+    /// (<see cref="Formatter.ResetToDefault"/>), in which case call <see cref="Register(bool)"/> with force.
+    /// </summary>
+    public static void Register() => Register(force: false);
+
+    /// <summary>Registers the formatters; with <paramref name="force"/> true, registers again even if already done.</summary>
+    /// <param name="force">Register again (needed after <see cref="Formatter.ResetToDefault"/>).</param>
+    public static void Register(bool force)
+    {
+        lock (Gate)
+        {
+            if (registered && !force)
+            {
+                return;
+            }
+
+            foreach (var type in RegisteredTypes)
+            {
+                Formatter.Register(type, (FormatDelegate<object>)WriteHtml, HtmlMimeType);
+                Formatter.Register(type, (FormatDelegate<object>)WritePlainText, PlainTextMimeType);
+                Formatter.SetPreferredMimeTypesFor(type, HtmlMimeType, PlainTextMimeType);
+            }
+
+            registered = true;
+        }
+    }
+
+    private static bool WriteHtml(object value, FormatContext context)
+    {
+        context.Writer.Write(MathDisplay.CanRender(value)
+            ? MathDisplay.ToHtml(value)
+            : "<code>" + WebUtility.HtmlEncode(value.ToString()) + "</code>");
+        return true;
+    }
+
+    private static bool WritePlainText(object value, FormatContext context)
+    {
+        context.Writer.Write(MathDisplay.CanRender(value) ? MathDisplay.ToPlainText(value) : value.ToString());
+        return true;
+    }
+
+    private static bool IsFormattedType(Type type) =>
+        (type.IsClass || type.IsValueType)
+        && !type.IsEnum
+        && !(type.IsAbstract && type.IsSealed)
+        && !typeof(Exception).IsAssignableFrom(type)
+        && !typeof(Attribute).IsAssignableFrom(type)
+        && !typeof(Delegate).IsAssignableFrom(type)
+        && !type.IsNested;
+}
