@@ -9,6 +9,9 @@ public enum CellKind
     /// <summary>Markdown prose, rendered into the report and never executed.</summary>
     Markdown,
 
+    /// <summary>An nbformat "raw" cell: shown as preformatted text in the report, never executed.</summary>
+    Raw,
+
     /// <summary>A cell in a language the runner cannot execute (for example F# or PowerShell); reported as a failure.</summary>
     Unsupported,
 }

@@ -60,6 +60,7 @@ public static class NotebookFile
         ArgumentNullException.ThrowIfNull(path);
         ArgumentNullException.ThrowIfNull(json);
         // Validate first with System.Text.Json: its errors carry a line and position, the Documents parser's do not.
+        var cellTypes = new List<string?>();
         try
         {
             using var document = JsonDocument.Parse(json);
@@ -69,6 +70,15 @@ public static class NotebookFile
             {
                 throw new NotebookLoadException(path,
                     $"Notebook '{path}' is not an nbformat notebook: the top level must be an object with a \"cells\" array.");
+            }
+
+            foreach (var cell in cells.EnumerateArray())
+            {
+                cellTypes.Add(cell.ValueKind == JsonValueKind.Object
+                              && cell.TryGetProperty("cell_type", out var type)
+                              && type.ValueKind == JsonValueKind.String
+                    ? type.GetString()
+                    : null);
             }
         }
         catch (JsonException e)
@@ -89,7 +99,7 @@ public static class NotebookFile
             throw new NotebookLoadException(path, $"Notebook '{path}' could not be parsed as a notebook: {e.Message}", e);
         }
 
-        return ToCells(parsed);
+        return ToCells(parsed, cellTypes.Count == parsed.Elements.Count ? cellTypes : null);
     }
 
     /// <summary>Parses .dib text (cells separated by lines such as <c>#!csharp</c> and <c>#!markdown</c>).</summary>
@@ -111,7 +121,7 @@ public static class NotebookFile
             throw new NotebookLoadException(path, $"Notebook '{path}' could not be parsed as a .dib file: {e.Message}", e);
         }
 
-        return ToCells(parsed);
+        return ToCells(parsed, null);
     }
 
     private static KernelInfoCollection KnownKernels()
@@ -127,11 +137,18 @@ public static class NotebookFile
         return kernels;
     }
 
-    private static IReadOnlyList<NotebookCell> ToCells(InteractiveDocument document)
+    private static IReadOnlyList<NotebookCell> ToCells(InteractiveDocument document, IReadOnlyList<string?>? cellTypes)
     {
         var cells = new List<NotebookCell>();
         foreach (var element in document.Elements)
         {
+            // The Documents parser turns nbformat raw cells into cells without a kernel name; keep them as text.
+            if (cellTypes is not null && cellTypes[cells.Count] == "raw")
+            {
+                cells.Add(new NotebookCell(cells.Count + 1, CellKind.Raw, "raw", element.Contents ?? string.Empty));
+                continue;
+            }
+
             // Cells without metadata come back with a null kernel name: in a C# notebook they are C#.
             var language = string.IsNullOrWhiteSpace(element.KernelName) ? CSharpKernelName : element.KernelName!;
             var kind = language switch

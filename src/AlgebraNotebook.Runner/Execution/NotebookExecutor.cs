@@ -33,7 +33,7 @@ public sealed class NotebookExecutor : IDisposable
         kernel.DefaultKernelName = csharp.Name;
     }
 
-    /// <summary>Runs every code cell in order and returns one result per cell (Markdown cells included, unexecuted).</summary>
+    /// <summary>Runs every code cell in order and returns one result per cell (Markdown and raw cells included, unexecuted).</summary>
     /// <param name="cells">The notebook cells in document order.</param>
     /// <param name="cancellationToken">Stops before the next cell when cancelled.</param>
     /// <returns>The results, in the same order as <paramref name="cells"/>.</returns>
@@ -48,7 +48,7 @@ public sealed class NotebookExecutor : IDisposable
             cancellationToken.ThrowIfCancellationRequested();
             results.Add(cell.Kind switch
             {
-                CellKind.Markdown => CellResult.Prose(cell),
+                CellKind.Markdown or CellKind.Raw => CellResult.Prose(cell),
                 CellKind.Unsupported => new CellResult(cell, Array.Empty<CellOutput>(),
                     $"The runner executes only C# cells; this cell's language is '{cell.Language}'."),
                 _ => await RunCodeCellAsync(cell).ConfigureAwait(false),

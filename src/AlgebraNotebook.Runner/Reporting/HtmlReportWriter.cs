@@ -29,6 +29,7 @@ public static class HtmlReportWriter
         .summary.failed { color: #9b2c1f; font-weight: 600; }
         section.cell { margin: 1rem 0; }
         section.prose { padding: 0 .25rem; }
+        section.raw pre { color: #4a4f55; }
         section.code { background: #fff; border: 1px solid #d6d3ca; border-left: 4px solid #2f5d50; border-radius: 4px; }
         section.code.failed { border-left-color: #9b2c1f; }
         .cell-label { font: 600 .75rem/1 system-ui, sans-serif; letter-spacing: .04em; text-transform: uppercase;
@@ -60,7 +61,7 @@ public static class HtmlReportWriter
         ArgumentNullException.ThrowIfNull(title);
         ArgumentNullException.ThrowIfNull(results);
         var failures = results.Count(r => r.Failed);
-        var codeCells = results.Count(r => r.Cell.Kind != CellKind.Markdown);
+        var codeCells = results.Count(r => r.Cell.Kind is CellKind.Code or CellKind.Unsupported);
         var html = new StringBuilder();
         html.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
             .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'; img-src data:\">\n")
@@ -96,6 +97,13 @@ public static class HtmlReportWriter
             html.Append("<section class=\"cell prose\" id=\"").Append(id).Append("\">\n")
                 .Append(MarkdownToHtml.Convert(cell.Source))
                 .Append("</section>\n");
+            return;
+        }
+
+        if (cell.Kind == CellKind.Raw)
+        {
+            html.Append("<section class=\"cell raw\" id=\"").Append(id).Append("\">\n<pre>")
+                .Append(HtmlText.Escape(cell.Source)).Append("</pre>\n</section>\n");
             return;
         }
 
