@@ -26,7 +26,6 @@ public static class AlgebraNotebookFormatters
     public const string PlainTextMimeType = "text/plain";
 
     private static readonly object Gate = new();
-    private static bool registered;
 
     /// <summary>
     /// The types that get formatters: every public, non-static class or struct of AlgebraNotebook.Exact that is not an
@@ -40,31 +39,20 @@ public static class AlgebraNotebookFormatters
         .ToArray();
 
     /// <summary>
-    /// Registers the formatters and preferred MIME types for every type in <see cref="RegisteredTypes"/>. Safe to call
-    /// more than once: later calls do nothing unless the formatting library was reset in between
-    /// (<see cref="Formatter.ResetToDefault"/>), in which case call <see cref="Register(bool)"/> with force.
+    /// Registers the formatters and preferred MIME types for every type in <see cref="RegisteredTypes"/>. Each call
+    /// registers again (the newest registration wins), so it also restores the formatters after
+    /// <see cref="Formatter.ResetToDefault"/>; call it once per kernel or host, not per value.
     /// </summary>
-    public static void Register() => Register(force: false);
-
-    /// <summary>Registers the formatters; with <paramref name="force"/> true, registers again even if already done.</summary>
-    /// <param name="force">Register again (needed after <see cref="Formatter.ResetToDefault"/>).</param>
-    public static void Register(bool force)
+    public static void Register()
     {
         lock (Gate)
         {
-            if (registered && !force)
-            {
-                return;
-            }
-
             foreach (var type in RegisteredTypes)
             {
                 Formatter.Register(type, (FormatDelegate<object>)WriteHtml, HtmlMimeType);
                 Formatter.Register(type, (FormatDelegate<object>)WritePlainText, PlainTextMimeType);
                 Formatter.SetPreferredMimeTypesFor(type, HtmlMimeType, PlainTextMimeType);
             }
-
-            registered = true;
         }
     }
 

@@ -9,7 +9,7 @@ namespace AlgebraNotebook.Notebook;
 /// </summary>
 public sealed class AlgebraNotebookKernelExtension : IKernelExtension
 {
-    /// <summary>Registers the formatters (idempotent) when the kernel loads the extension.</summary>
+    /// <summary>Registers the formatters when the kernel loads the extension.</summary>
     /// <param name="kernel">The loading kernel; not modified.</param>
     /// <returns>A completed task.</returns>
     public Task OnLoadAsync(Kernel kernel)
