@@ -36,7 +36,7 @@ public class RunnerAppTests
             ("markdown", "# Failures", null),
             ("code", "var half = Rational.Parse(\"1/2\");\nint wrong = \"text\";", "csharp"),
             ("code", "Console.WriteLine(\"<script>alert(1)</script>\");\nthrow new InvalidOperationException(\"runtime <b>failure</b>\");", "csharp"),
-            ("code", "Console.WriteLine(\"after: \" + (Rational.Parse(\"1/3\") + Rational.Parse(\"1/6\")));", null));
+            ("code", "Console.WriteLine(\"after: \" + (Rational.Parse(\"1/3\") + Rational.Parse(\"1/6\")));\n\"<script>returned</script>\"", null));
         var (code, stdout, stderr) = await Run("run", path);
 
         Assert.Equal(1, code);
@@ -55,6 +55,7 @@ public class RunnerAppTests
         Assert.DoesNotContain("<script>", html);
         // 1/3 + 1/6 = 1/2: the cell after the failures ran.
         Assert.Contains("after: 1/2", html);
+        Assert.Contains("&lt;script&gt;returned&lt;/script&gt;", html);
     }
 
     [Fact]
@@ -62,14 +63,15 @@ public class RunnerAppTests
     {
         using var temp = new TempNotebook();
         var path = temp.WriteText("small.dib",
-            "#!markdown\n\n## Gaussian *check*\n\n#!csharp\n\nvar z = GaussianRational.Parse(\"1/2 + 1/2 i\");\n\n#!csharp\n\nConsole.WriteLine(z * z);\n");
+            "#!markdown\n\n## Gaussian *check*\n\n#!csharp\n\nvar z = GaussianRational.Parse(\"1/2 + 1/2 i\");\n\n#!csharp\n\nConsole.WriteLine(z * z);\nConsole.WriteLine(\"second line\");\n");
         var report = Path.Combine(temp.Folder, "out", "small-report.html");
         var (code, _, stderr) = await Run("run", path, "-o", report);
         Assert.True(code == 0, $"exit {code}; stderr: {stderr}");
         var html = File.ReadAllText(report);
         Assert.Contains("<h2>Gaussian <em>check</em></h2>", html);
         // (1/2 + i/2)^2 = i/2 (from memory: (1+i)^2 = 2i).
-        Assert.Contains("<pre>1/2 i</pre>", html);
+        // Consecutive console writes are joined into one output block.
+        Assert.Contains("<pre>1/2 i\nsecond line</pre>", html);
     }
 
     [Fact]

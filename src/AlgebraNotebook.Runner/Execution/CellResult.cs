@@ -4,7 +4,8 @@ namespace AlgebraNotebook.Runner.Execution;
 
 /// <summary>A notebook cell together with what running it produced.</summary>
 /// <param name="Cell">The cell as loaded.</param>
-/// <param name="Outputs">Outputs in the order the kernel produced them (empty for Markdown and raw cells).</param>
+/// <param name="Outputs">Outputs in the order the kernel produced them, consecutive writes to the same console stream
+/// joined into one output (empty for Markdown and raw cells).</param>
 /// <param name="Failure">Null when the cell succeeded (or was not executed); otherwise the compiler diagnostics or
 /// the exception type and message, as one text.</param>
 public sealed record CellResult(NotebookCell Cell, IReadOnlyList<CellOutput> Outputs, string? Failure)

@@ -162,6 +162,14 @@ public sealed class NotebookExecutor : IDisposable
 
         // Anything that is not HTML is shown as escaped text, whatever its MIME type.
         var mime = chosen.MimeType == CellOutput.Html ? CellOutput.Html : CellOutput.PlainText;
-        outputs.Add(new CellOutput(kind, mime, chosen.Value ?? string.Empty));
+        var text = chosen.Value ?? string.Empty;
+        // Console writes arrive one event per call; consecutive ones of the same stream read as one block.
+        if (plainOnly && outputs.Count > 0 && outputs[^1].Kind == kind)
+        {
+            outputs[^1] = outputs[^1] with { Content = outputs[^1].Content + text };
+            return;
+        }
+
+        outputs.Add(new CellOutput(kind, mime, text));
     }
 }
