@@ -95,7 +95,7 @@ public sealed partial class Matrix<T>
     /// <exception cref="ExactArgumentException">The matrix is not square, or the exponent is negative.</exception>
     public Matrix<T> Pow(int exponent)
     {
-        RequireSquare("raise to a power");
+        RequireSquare("take a power of");
         if (exponent < 0)
         {
             throw new ExactArgumentException(
