@@ -87,20 +87,43 @@ internal static class IntegerFactoring
             return factors;
         }
 
-        if (n >= DeterministicPrimalityLimit)
+        // Every prime factor of the cofactor exceeds the trial bound, so a prime power p^k has k <= log(n) / log(bound).
+        var maximumPower = (int)(n.GetBitLength() / 19) + 1;
+        for (var k = 1; k <= maximumPower; k++)
         {
-            throw new BeyondCapabilityException(
-                $"{purpose}: cannot factor {original}: after trial division up to {TrialDivisionBound} the cofactor {n} exceeds {DeterministicPrimalityLimit}, the limit of the deterministic primality test.");
-        }
+            var root = k == 1 ? n : IntegerRoot(n, k);
+            if (BigInteger.Pow(root, k) == n && IsProbablePrime(root))
+            {
+                // A "composite" verdict of Miller-Rabin is always right; a "prime" verdict is proven only below the limit.
+                if (root >= DeterministicPrimalityLimit)
+                {
+                    throw new BeyondCapabilityException(
+                        $"{purpose}: cannot factor {original}: after trial division up to {TrialDivisionBound} the cofactor {root}^{k} has a base above {DeterministicPrimalityLimit}, the limit of the deterministic primality test.");
+                }
 
-        if (IsProbablePrime(n))
-        {
-            factors.Add((n, 1));
-            return factors;
+                factors.Add((root, k));
+                return factors;
+            }
         }
 
         throw new BeyondCapabilityException(
-            $"{purpose}: cannot factor {original}: after trial division up to {TrialDivisionBound} the cofactor {n} is composite with every prime factor above {TrialDivisionBound}.");
+            $"{purpose}: cannot factor {original}: after trial division up to {TrialDivisionBound} the cofactor {n} is composite with every prime factor above {TrialDivisionBound}, and not a prime power.");
+    }
+
+    /// <summary>The integer k-th root floor(n^(1/k)) of a positive n, by Newton's method.</summary>
+    public static BigInteger IntegerRoot(BigInteger n, int k)
+    {
+        var x = BigInteger.One << (int)((n.GetBitLength() + k - 1) / k);
+        while (true)
+        {
+            var next = ((k - 1) * x + n / BigInteger.Pow(x, k - 1)) / k;
+            if (next >= x)
+            {
+                return x;
+            }
+
+            x = next;
+        }
     }
 
     /// <summary>All positive divisors of |n| (n non-zero), in increasing order.</summary>
