@@ -11,12 +11,13 @@ public sealed partial class TruncatedSeries<T>
     {
         ArgumentNullException.ThrowIfNull(left);
         ArgumentNullException.ThrowIfNull(right);
-        if (right.IsZero)
+        // Shortcuts only for the bare constants: an exact zero may still carry parameters that the sum must keep.
+        if (right.IsBareZero)
         {
             return left;
         }
 
-        if (left.IsZero)
+        if (left.IsBareZero)
         {
             return right;
         }
@@ -39,24 +40,20 @@ public sealed partial class TruncatedSeries<T>
     }
 
     /// <summary>
-    /// Product, truncated at the smaller of the two orders (an exact zero factor gives an exact zero).
-    /// Cost: one coefficient product per pair of known terms whose degrees add up to less than that order.
+    /// Product, truncated at the smaller of the two orders (so 0 * (x + O(x^3)) is O(x^3): the rule is applied uniformly,
+    /// which keeps distributivity exact). Cost: one coefficient product per pair of known terms whose degrees add up to
+    /// less than that order.
     /// </summary>
     public static TruncatedSeries<T> operator *(TruncatedSeries<T> left, TruncatedSeries<T> right)
     {
         ArgumentNullException.ThrowIfNull(left);
         ArgumentNullException.ThrowIfNull(right);
-        if (left.IsZero || right.IsZero)
-        {
-            return ZeroValue;
-        }
-
-        if (right.IsOne)
+        if (right.IsBareOne)
         {
             return left;
         }
 
-        if (left.IsOne)
+        if (left.IsBareOne)
         {
             return right;
         }
@@ -65,40 +62,31 @@ public sealed partial class TruncatedSeries<T>
         return FromSums(MultiplyTerms(left._terms, right._terms, order), order, left._parameters.Concat(right._parameters));
     }
 
-    /// <summary>Every coefficient multiplied on the left by <paramref name="scalar"/>; a zero scalar gives the exact zero.</summary>
+    /// <summary>
+    /// Every coefficient multiplied on the left by <paramref name="scalar"/>; same order and parameters (as for the
+    /// product with the constant series <paramref name="scalar"/>).
+    /// </summary>
     public static TruncatedSeries<T> operator *(T scalar, TruncatedSeries<T> series)
     {
         ArgumentNullException.ThrowIfNull(scalar);
         ArgumentNullException.ThrowIfNull(series);
-        if (scalar.IsZero)
-        {
-            return ZeroValue;
-        }
-
         return Create(series._terms.Select(t => (t.Monomial, scalar * t.Coefficient)), series.Order, series._parameters);
     }
 
-    /// <summary>Every coefficient multiplied on the right by <paramref name="scalar"/>; a zero scalar gives the exact zero.</summary>
+    /// <summary>
+    /// Every coefficient multiplied on the right by <paramref name="scalar"/>; same order and parameters (as for the
+    /// product with the constant series <paramref name="scalar"/>).
+    /// </summary>
     public static TruncatedSeries<T> operator *(TruncatedSeries<T> series, T scalar)
     {
         ArgumentNullException.ThrowIfNull(scalar);
         ArgumentNullException.ThrowIfNull(series);
-        if (scalar.IsZero)
-        {
-            return ZeroValue;
-        }
-
         return Create(series._terms.Select(t => (t.Monomial, t.Coefficient * scalar)), series.Order, series._parameters);
     }
 
-    /// <summary>This series times a rational factor (a zero factor gives the exact zero).</summary>
+    /// <summary>This series times a rational factor; same order and parameters (so Scale(0) of x + O(x^3) is O(x^3)).</summary>
     public TruncatedSeries<T> Scale(Rational factor)
     {
-        if (factor.IsZero)
-        {
-            return ZeroValue;
-        }
-
         return factor.IsOne ? this : Create(_terms.Select(t => (t.Monomial, t.Coefficient.Scale(factor))), Order, _parameters);
     }
 

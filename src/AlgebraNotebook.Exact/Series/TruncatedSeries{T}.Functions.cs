@@ -21,7 +21,7 @@ public sealed partial class TruncatedSeries<T>
     {
         if (IsZero)
         {
-            return OneValue;
+            return Create([(Monomial.One, T.One)], ExactOrder, _parameters);
         }
 
         RequireZeroConstantTerm("exp", "exp(c) of a non-zero constant term c is not in the coefficient ring; only exp(0) = 1 is");
@@ -55,7 +55,7 @@ public sealed partial class TruncatedSeries<T>
     {
         if (IsOne)
         {
-            return ZeroValue;
+            return Create([], ExactOrder, _parameters);
         }
 
         RequireConstantTermOne("log", "log(c) of a constant term c other than 1 is not in the coefficient ring; divide by the constant term first");
@@ -112,7 +112,7 @@ public sealed partial class TruncatedSeries<T>
     {
         if (IsZero)
         {
-            return (ZeroValue, OneValue);
+            return (this, Create([(Monomial.One, T.One)], ExactOrder, _parameters));
         }
 
         RequireZeroConstantTerm(name, $"{name} of a non-zero constant term is not in the coefficient ring");
@@ -214,7 +214,7 @@ public sealed partial class TruncatedSeries<T>
 
         if (IsOne)
         {
-            return OneValue;
+            return this;
         }
 
         RequireConstantTermOne($"the power {exponent}", $"a non-integer power of a constant term other than 1 is not in the coefficient ring");

@@ -14,8 +14,10 @@ namespace AlgebraNotebook.Exact.Series;
 /// Conventions. <see cref="Terms"/> lists the known non-zero terms in ascending total degree; within one degree
 /// they are in descending <see cref="MonomialOrder.Default"/> (so x^2, x*y, y^2 when x was used first).
 /// <see cref="Order"/> is <see cref="ExactOrder"/> (<see cref="int.MaxValue"/>) when nothing is unknown.
-/// <see cref="Parameters"/> are the small parameters the unknown tail is measured in; for an exact series they are the
-/// symbols occurring in the terms. A series without parameters is a constant and therefore exact.
+/// <see cref="Parameters"/> are the small parameters the unknown tail is measured in: those of the inputs a series was
+/// built from, plus the symbols of its terms. They are carried along even by exact results (so that (a*b)*c and
+/// a*(b*c) agree in every case), but for an exact series they are not part of equality. A series without parameters
+/// is a constant and therefore exact.
 /// </para>
 /// <para>
 /// Big-O arithmetic: combining two series (+, -, *) gives the minimum of the two orders and the union of the
@@ -98,6 +100,10 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
             return ConstantTermCore;
         }
     }
+
+    private bool IsBareZero => IsZero && _parameters.Length == 0;
+
+    private bool IsBareOne => IsOne && _parameters.Length == 0;
 
     private T ConstantTermCore => _terms.Length > 0 && _terms[0].Monomial.IsOne ? _terms[0].Coefficient : T.Zero;
 
@@ -234,7 +240,10 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
     public TruncatedSeries<T> Conjugate() =>
         new(_terms.Select(t => (t.Monomial, t.Coefficient.Conjugate())).ToArray(), Order, _parameters);
 
-    /// <inheritdoc />
+    /// <summary>
+    /// Equality: same known terms and same order; for a series that is not exact also the same parameters
+    /// (O(x^3) and O((x, y)^3) are different statements). Use <see cref="AgreesWith"/> for consistency up to order.
+    /// </summary>
     public bool Equals(TruncatedSeries<T>? other)
     {
         if (ReferenceEquals(this, other))
@@ -242,16 +251,25 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
             return true;
         }
 
-        if (other is null || other.Order != Order || other._terms.Length != _terms.Length || other._parameters.Length != _parameters.Length)
+        if (other is null || other.Order != Order || other._terms.Length != _terms.Length)
         {
             return false;
         }
 
-        for (var k = 0; k < _parameters.Length; k++)
+        // The parameters say in which symbols the unknown tail is measured; an exact series has no tail.
+        if (Order != ExactOrder)
         {
-            if (!ReferenceEquals(_parameters[k], other._parameters[k]))
+            if (other._parameters.Length != _parameters.Length)
             {
                 return false;
+            }
+
+            for (var k = 0; k < _parameters.Length; k++)
+            {
+                if (!ReferenceEquals(_parameters[k], other._parameters[k]))
+                {
+                    return false;
+                }
             }
         }
 
@@ -276,9 +294,12 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
         {
             var hash = new HashCode();
             hash.Add(Order);
-            foreach (var p in _parameters)
+            if (Order != ExactOrder)
             {
-                hash.Add(p.Id);
+                foreach (var p in _parameters)
+                {
+                    hash.Add(p.Id);
+                }
             }
 
             foreach (var (m, c) in _terms)
@@ -294,7 +315,7 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
         return _hash;
     }
 
-    /// <summary>Structural equality: same known terms, same order, same parameters.</summary>
+    /// <summary>Equality as in <see cref="Equals(TruncatedSeries{T})"/>.</summary>
     public static bool operator ==(TruncatedSeries<T>? left, TruncatedSeries<T>? right) =>
         left is null ? right is null : left.Equals(right);
 
@@ -303,7 +324,7 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
 
     /// <summary>
     /// Builds the canonical series: drops zero coefficients and terms of degree &gt;= order, adds repeated monomials,
-    /// sorts, and settles the parameter list (exact series: the symbols of the terms; no parameters: exact).
+    /// sorts, and settles the parameter list (the given ones plus the symbols of the terms; no parameters: exact).
     /// </summary>
     internal static TruncatedSeries<T> Create(IEnumerable<(Monomial Monomial, T Coefficient)> terms, int order, IEnumerable<Symbol> parameters)
     {
@@ -334,11 +355,7 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
         }
 
         kept.Sort(static (a, b) => CompareMonomials(a.Monomial, b.Monomial));
-        var symbols = new HashSet<Symbol>();
-        if (order != ExactOrder)
-        {
-            symbols.UnionWith(parameters);
-        }
+        var symbols = new HashSet<Symbol>(parameters);
 
         foreach (var (m, _) in kept)
         {
