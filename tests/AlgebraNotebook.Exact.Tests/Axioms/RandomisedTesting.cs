@@ -61,8 +61,8 @@ public static class RandomisedTesting
     /// <summary>A random Gaussian rational (sometimes real, sometimes purely imaginary).</summary>
     public static GaussianRational GaussianRational(Random random) => random.Next(6) switch
     {
-        0 => new GaussianRational(Rational(random), Scalars.Rational.Zero),
-        1 => new GaussianRational(Scalars.Rational.Zero, Rational(random)),
+        0 => new GaussianRational(Rational(random), Exact.Scalars.Rational.Zero),
+        1 => new GaussianRational(Exact.Scalars.Rational.Zero, Rational(random)),
         _ => new GaussianRational(Rational(random), Rational(random)),
     };
 }
