@@ -11,7 +11,10 @@ internal sealed class LatexRenderer
 {
     private static readonly Dictionary<string, string> Operators = new(StringComparer.Ordinal)
     {
-        ["\u2212"] = "-",
+        ["\u2212"] = " - ",
+        ["+"] = " + ",
+        ["="] = " = ",
+        [","] = ", ",
         ["\u22C5"] = @"\cdot",
         ["×"] = @"\times",
         ["⊗"] = @"\otimes",

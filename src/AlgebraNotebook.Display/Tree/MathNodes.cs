@@ -116,6 +116,9 @@ public static class MathNodes
         return collected.Count == 1 && !collected[0].Negative ? collected[0].Magnitude : new SumNode(collected);
     }
 
+    /// <summary>A sum of signed terms (see <see cref="Sum(IEnumerable{SumTerm})"/>).</summary>
+    public static MathNode Sum(params SumTerm[] terms) => Sum((IEnumerable<SumTerm>)terms);
+
     /// <summary>The sum of the given nodes, each taken with its own sign (see <see cref="Sum(IEnumerable{SumTerm})"/>).</summary>
     public static MathNode Sum(params MathNode[] terms) => Sum(terms.Select(t => new SumTerm(false, t)));
 
