@@ -31,6 +31,14 @@ public static partial class MathDisplay
     /// <summary>The CSS class of the <c>div</c> that <see cref="ToHtml"/> returns.</summary>
     public const string HtmlClass = "algebranotebook-math";
 
+    /// <summary>
+    /// The inline style that <see cref="ToHtml"/> puts on its <c>math</c> element: a font list that starts with fonts
+    /// carrying an OpenType MATH table. Browsers stretch brackets around matrices and fractions only with such a font,
+    /// and the generic <c>math</c> family does not always resolve to one.
+    /// </summary>
+    public const string HtmlMathStyle =
+        "font-family: 'STIX Two Math', 'Latin Modern Math', 'Cambria Math', 'DejaVu Math TeX Gyre', 'Libertinus Math', math";
+
     /// <summary>True when a converter is registered for the runtime type of <paramref name="value"/> (false for null).</summary>
     public static bool CanRender(object? value) => value is not null && ConverterRegistry.CanConvert(value.GetType());
 
@@ -73,7 +81,8 @@ public static partial class MathDisplay
     /// An HTML fragment for a notebook's text/html output:
     /// <c>&lt;div class="algebranotebook-math" data-latex="..."&gt;&lt;math display="block" ...&gt;...&lt;/math&gt;&lt;/div&gt;</c>.
     /// The LaTeX of the same value is kept, attribute-escaped, in the <c>data-latex</c> attribute of the div so that
-    /// a copy action or script can offer it; the MathML is exactly <see cref="ToMathML"/>.
+    /// a copy action or script can offer it. The MathML is <see cref="ToMathML"/> with one addition: a
+    /// <c>style</c> attribute choosing a math font (<see cref="HtmlMathStyle"/>).
     /// </summary>
     /// <exception cref="Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
     public static string ToHtml(object value)
@@ -82,7 +91,7 @@ public static partial class MathDisplay
         var html = new StringBuilder();
         html.Append("<div class=\"").Append(HtmlClass).Append("\" data-latex=\"");
         XmlText.Append(html, LatexRenderer.Render(tree));
-        html.Append("\">").Append(MathMLRenderer.Render(tree)).Append("</div>");
+        html.Append("\">").Append(MathMLRenderer.Render(tree, HtmlMathStyle)).Append("</div>");
         return html.ToString();
     }
 }

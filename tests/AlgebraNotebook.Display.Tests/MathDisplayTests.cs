@@ -49,7 +49,13 @@ public class MathDisplayTests
         Assert.Equal("div", div.Name.LocalName);
         Assert.Equal("algebranotebook-math", div.Attribute("class")?.Value);
         Assert.Equal(@"-\frac{3}{4}", div.Attribute("data-latex")?.Value);
-        Assert.EndsWith(MathDisplay.ToMathML(value) + "</div>", html);
+        var math = Assert.Single(div.Elements());
+        Assert.Equal(XName.Get("math", MathDisplay.MathMLNamespace), math.Name);
+        Assert.Equal(MathDisplay.HtmlMathStyle, math.Attribute("style")?.Value);
+
+        // Apart from the font style the MathML is the same as ToMathML.
+        math.Attribute("style")!.Remove();
+        Assert.Equal(XElement.Parse(MathDisplay.ToMathML(value)).ToString(SaveOptions.DisableFormatting), math.ToString(SaveOptions.DisableFormatting));
     }
 
     private sealed record Angle(int Degrees);

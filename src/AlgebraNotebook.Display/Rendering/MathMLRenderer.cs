@@ -14,10 +14,18 @@ internal sealed class MathMLRenderer
 
     private readonly StringBuilder _out = new();
 
-    public static string Render(MathNode node)
+    public static string Render(MathNode node, string? style = null)
     {
         var renderer = new MathMLRenderer();
-        renderer._out.Append("<math display=\"block\" xmlns=\"").Append(Namespace).Append("\">");
+        renderer._out.Append("<math display=\"block\" xmlns=\"").Append(Namespace).Append('"');
+        if (style is not null)
+        {
+            renderer._out.Append(" style=\"");
+            XmlText.Append(renderer._out, style);
+            renderer._out.Append('"');
+        }
+
+        renderer._out.Append('>');
         renderer.Write(node);
         renderer._out.Append("</math>");
         return renderer._out.ToString();

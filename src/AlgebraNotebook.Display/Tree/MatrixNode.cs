@@ -8,17 +8,12 @@ namespace AlgebraNotebook.Display.Tree;
 /// </summary>
 public sealed record MatrixNode : MathNode
 {
-    /// <summary>Creates the matrix from its rows; all rows have the same, positive length.</summary>
-    /// <exception cref="ExactArgumentException">No rows, an empty row, or rows of different lengths.</exception>
+    /// <summary>Creates the matrix from its rows; all rows have the same length. Empty matrices (no rows, or rows without entries) are allowed.</summary>
+    /// <exception cref="ExactArgumentException">Rows of different lengths.</exception>
     public MatrixNode(IReadOnlyList<IReadOnlyList<MathNode>> rows, FenceKind brackets = FenceKind.Parentheses)
     {
         ArgumentNullException.ThrowIfNull(rows);
-        if (rows.Count == 0 || rows[0] is null || rows[0].Count == 0)
-        {
-            throw new ExactArgumentException("A displayed matrix needs at least one row and one column.", nameof(rows));
-        }
-
-        var width = rows[0].Count;
+        var width = rows.Count == 0 ? 0 : (rows[0] ?? throw new ArgumentNullException(nameof(rows), "Row 0 is null.")).Count;
         var copy = new IReadOnlyList<MathNode>[rows.Count];
         for (var r = 0; r < rows.Count; r++)
         {
@@ -50,10 +45,10 @@ public sealed record MatrixNode : MathNode
     public int RowCount => Rows.Count;
 
     /// <summary>Number of columns.</summary>
-    public int ColumnCount => Rows[0].Count;
+    public int ColumnCount => Rows.Count == 0 ? 0 : Rows[0].Count;
 
     /// <inheritdoc />
-    public override bool IsTall => true;
+    public override bool IsTall => Rows.Count > 0;
 
     /// <summary>Structural equality: same brackets and the same entries in the same places.</summary>
     public bool Equals(MatrixNode? other) =>
