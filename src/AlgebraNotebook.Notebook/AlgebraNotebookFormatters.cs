@@ -1,6 +1,6 @@
-using System.Net;
 using System.Reflection;
 using AlgebraNotebook.Display;
+using AlgebraNotebook.Display.Tree;
 using AlgebraNotebook.Exact;
 using Microsoft.DotNet.Interactive.Formatting;
 
@@ -14,7 +14,9 @@ namespace AlgebraNotebook.Notebook;
 /// <remarks>
 /// The formatter registry is global to the process. Generic types (Matrix&lt;T&gt;, Polynomial&lt;T&gt;, ...) are
 /// registered once as open generic type definitions, which the formatting library applies to every closed type.
-/// A value for which <see cref="MathDisplay.CanRender"/> is false falls back to its ToString(), HTML-escaped in text/html.
+/// A value for which <see cref="MathDisplay.CanRender"/> is false (a type the display layer has no converter for yet,
+/// or a generic type over non-renderable arguments) is handed to the formatting library's default object formatter,
+/// so it looks exactly as it would without this package.
 /// LaTeX is not emitted as a MIME type; it is available from <see cref="MathDisplay.ToLatex"/>.
 /// </remarks>
 public static class AlgebraNotebookFormatters
@@ -28,13 +30,14 @@ public static class AlgebraNotebookFormatters
     private static readonly object Gate = new();
 
     /// <summary>
-    /// The types that get formatters: every public, non-static class or struct of AlgebraNotebook.Exact that is not an
-    /// exception, attribute, delegate, enum or interface; generic types appear as open definitions (Matrix`1 ...).
-    /// Sorted by full name.
+    /// The types that get formatters: every public, non-static, non-nested class or struct of AlgebraNotebook.Exact
+    /// that is not an exception, attribute, delegate, enum or interface (generic types appear as open definitions such
+    /// as Matrix`1), plus the display tree base <see cref="MathNode"/> (and so every node type). Sorted by full name.
     /// </summary>
     public static IReadOnlyList<Type> RegisteredTypes { get; } = typeof(ExactArgumentException).Assembly
         .GetExportedTypes()
         .Where(IsFormattedType)
+        .Append(typeof(MathNode))
         .OrderBy(t => t.FullName, StringComparer.Ordinal)
         .ToArray();
 
@@ -58,15 +61,23 @@ public static class AlgebraNotebookFormatters
 
     private static bool WriteHtml(object value, FormatContext context)
     {
-        context.Writer.Write(MathDisplay.CanRender(value)
-            ? MathDisplay.ToHtml(value)
-            : "<code>" + WebUtility.HtmlEncode(value.ToString()) + "</code>");
+        if (!MathDisplay.CanRender(value))
+        {
+            return Formatter.GetPreferredFormatterFor(typeof(object), HtmlMimeType).Format(value, context);
+        }
+
+        context.Writer.Write(MathDisplay.ToHtml(value));
         return true;
     }
 
     private static bool WritePlainText(object value, FormatContext context)
     {
-        context.Writer.Write(MathDisplay.CanRender(value) ? MathDisplay.ToPlainText(value) : value.ToString());
+        if (!MathDisplay.CanRender(value))
+        {
+            return Formatter.GetPreferredFormatterFor(typeof(object), PlainTextMimeType).Format(value, context);
+        }
+
+        context.Writer.Write(MathDisplay.ToPlainText(value));
         return true;
     }
 
