@@ -68,4 +68,23 @@ public class HtmlReportWriterTests
         Assert.DoesNotContain("https://", html);
         Assert.Contains("default-src 'none'", html);
     }
+
+    [Fact]
+    public void A_small_report_matches_the_approved_file()
+    {
+        var html = Write(
+            new CellResult(new NotebookCell(1, CellKind.Markdown, "markdown", "# Small *report*\n\nTwo `cells`:\n- one\n- two"),
+                Array.Empty<CellOutput>(), null),
+            new CellResult(new NotebookCell(2, CellKind.Code, "csharp", "var a = Rational.Parse(\"1/2\");\nConsole.WriteLine(a < 1);\na"),
+                new[]
+                {
+                    new CellOutput(CellOutputKind.StandardOutput, CellOutput.PlainText, "True\n"),
+                    new CellOutput(CellOutputKind.ReturnValue, CellOutput.Html, "<math display=\"block\"><mfrac><mn>1</mn><mn>2</mn></mfrac></math>"),
+                },
+                null),
+            new CellResult(new NotebookCell(3, CellKind.Raw, "raw", "raw <text>"), Array.Empty<CellOutput>(), null),
+            new CellResult(new NotebookCell(4, CellKind.Code, "csharp", "throw new Exception(\"no\");"),
+                Array.Empty<CellOutput>(), "System.Exception: no"));
+        Approvals.Verify("small_report", "html", html);
+    }
 }
