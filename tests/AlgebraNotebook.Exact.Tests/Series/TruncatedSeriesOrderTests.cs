@@ -87,7 +87,7 @@ public class TruncatedSeriesOrderTests
     {
         var t3 = TruncatedSeries<Rational>.Parameter(T, 3);
         var t4 = TruncatedSeries<Rational>.Parameter(T, 4);
-        var s3 = TruncatedSeries<Rational>.Parameter("s", 3);
+        var s3 = TruncatedSeries<Rational>.Parameter("order_s", 3);
         Assert.NotEqual(t3, t4);
         Assert.True(t3.AgreesWith(t4));
         Assert.NotEqual(t3 - t3, s3 - s3);
@@ -107,7 +107,7 @@ public class TruncatedSeriesOrderTests
     public void Coefficients_may_themselves_be_series()
     {
         // The generic code runs over any Q-algebra: here coefficients are series in u, and exp(u t) has [t^2] = u^2/2.
-        var u = TruncatedSeries<Rational>.Parameter("u", 4);
+        var u = TruncatedSeries<Rational>.Parameter("order_u", 4);
         var t = TruncatedSeries<TruncatedSeries<Rational>>.Parameter(T, 4);
         var e = (u * t).Exp();
         Assert.Equal((u * u).Scale(new Rational(1, 2)), e.CoefficientOf(T, 2));
