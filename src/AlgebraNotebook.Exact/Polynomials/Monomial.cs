@@ -124,7 +124,7 @@ public sealed class Monomial : IEquatable<Monomial>
             return left;
         }
 
-        return Merge(left, right, static (a, b) => a + b);
+        return Merge(left, right, MergeKind.Add);
     }
 
     /// <summary>True when this monomial divides <paramref name="other"/>.</summary>
@@ -159,14 +159,17 @@ public sealed class Monomial : IEquatable<Monomial>
             throw new ExactArgumentException($"{divisor} does not divide {this}.", nameof(divisor));
         }
 
-        return divisor.IsOne ? this : Merge(this, divisor, static (a, b) => a - b);
+        return divisor.IsOne ? this : Merge(this, divisor, MergeKind.Subtract);
     }
 
+    /// <summary>The quotient this / divisor when the caller knows the divisor divides this monomial.</summary>
+    internal Monomial DivideByUnchecked(Monomial divisor) => divisor.IsOne ? this : Merge(this, divisor, MergeKind.Subtract);
+
     /// <summary>Least common multiple (componentwise maximum of exponents).</summary>
-    public static Monomial Lcm(Monomial left, Monomial right) => Merge(left, right, Math.Max);
+    public static Monomial Lcm(Monomial left, Monomial right) => Merge(left, right, MergeKind.Max);
 
     /// <summary>Greatest common divisor (componentwise minimum of exponents).</summary>
-    public static Monomial Gcd(Monomial left, Monomial right) => Merge(left, right, Math.Min);
+    public static Monomial Gcd(Monomial left, Monomial right) => Merge(left, right, MergeKind.Min);
 
     /// <summary>True when the two monomials share no symbol.</summary>
     public static bool AreCoprime(Monomial left, Monomial right)
@@ -213,41 +216,78 @@ public sealed class Monomial : IEquatable<Monomial>
     public Monomial Without(Symbol symbol) =>
         ExponentOf(symbol) == 0 ? this : FromFactors(Factors.Where(f => !ReferenceEquals(f.Symbol, symbol)));
 
-    private static Monomial Merge(Monomial left, Monomial right, Func<int, int, int> combine)
+    // Kept allocation-light: Groebner computations multiply and divide monomials in their inner loops.
+    private enum MergeKind
     {
-        var symbols = new List<Symbol>(left._symbols.Length + right._symbols.Length);
-        var exponents = new List<int>(left._symbols.Length + right._symbols.Length);
+        Add,
+        Subtract,
+        Max,
+        Min,
+    }
+
+    internal Symbol[] SymbolArray => _symbols;
+
+    internal int[] ExponentArray => _exponents;
+
+    private static Monomial Merge(Monomial left, Monomial right, MergeKind kind)
+    {
+        var ls = left._symbols;
+        var rs = right._symbols;
+        var le = left._exponents;
+        var re = right._exponents;
+        var capacity = ls.Length + rs.Length;
+        var symbols = new Symbol[capacity];
+        var exponents = new int[capacity];
+        var count = 0;
         int i = 0, j = 0;
-        while (i < left._symbols.Length || j < right._symbols.Length)
+        while (i < ls.Length || j < rs.Length)
         {
             Symbol symbol;
             int a = 0, b = 0;
-            if (j == right._symbols.Length || (i < left._symbols.Length && left._symbols[i].Id < right._symbols[j].Id))
+            if (j == rs.Length || (i < ls.Length && ls[i].Id < rs[j].Id))
             {
-                symbol = left._symbols[i];
-                a = left._exponents[i++];
+                symbol = ls[i];
+                a = le[i++];
             }
-            else if (i == left._symbols.Length || right._symbols[j].Id < left._symbols[i].Id)
+            else if (i == ls.Length || rs[j].Id < ls[i].Id)
             {
-                symbol = right._symbols[j];
-                b = right._exponents[j++];
+                symbol = rs[j];
+                b = re[j++];
             }
             else
             {
-                symbol = left._symbols[i];
-                a = left._exponents[i++];
-                b = right._exponents[j++];
+                symbol = ls[i];
+                a = le[i++];
+                b = re[j++];
             }
 
-            var e = checked(combine(a, b));
+            var e = kind switch
+            {
+                MergeKind.Add => checked(a + b),
+                MergeKind.Subtract => a - b,
+                MergeKind.Max => Math.Max(a, b),
+                _ => Math.Min(a, b),
+            };
             if (e != 0)
             {
-                symbols.Add(symbol);
-                exponents.Add(e);
+                symbols[count] = symbol;
+                exponents[count] = e;
+                count++;
             }
         }
 
-        return symbols.Count == 0 ? One : new Monomial(symbols.ToArray(), exponents.ToArray());
+        if (count == 0)
+        {
+            return One;
+        }
+
+        if (count < capacity)
+        {
+            Array.Resize(ref symbols, count);
+            Array.Resize(ref exponents, count);
+        }
+
+        return new Monomial(symbols, exponents);
     }
 
     /// <inheritdoc />

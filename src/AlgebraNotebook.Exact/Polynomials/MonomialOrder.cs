@@ -24,6 +24,11 @@ public sealed class MonomialOrder : IComparer<Monomial>
 {
     private readonly Dictionary<Symbol, int> _rank;
 
+    // Rank key by Symbol.Id for the ranked case; empty when there is no ranking (rank then follows Id).
+    private readonly int[] _keyById;
+
+    private IComparer<Monomial>? _descending;
+
     /// <summary>Creates an order of the given kind with an explicit ranking (highest first).</summary>
     public MonomialOrder(MonomialOrderKind kind, IEnumerable<Symbol>? ranking = null)
     {
@@ -34,7 +39,29 @@ public sealed class MonomialOrder : IComparer<Monomial>
         {
             _rank[Ranking[k]] = k;
         }
+
+        if (Ranking.Count == 0)
+        {
+            _keyById = [];
+        }
+        else
+        {
+            var maxId = Ranking.Max(r => r.Id);
+            _keyById = new int[maxId + 1];
+            for (var id = 0; id <= maxId; id++)
+            {
+                _keyById[id] = Ranking.Count + id;
+            }
+
+            for (var k = 0; k < Ranking.Count; k++)
+            {
+                _keyById[Ranking[k].Id] = k;
+            }
+        }
     }
+
+    /// <summary>Sorts monomials from largest to smallest under this order.</summary>
+    internal IComparer<Monomial> Descending => _descending ??= Comparer<Monomial>.Create((a, b) => CompareCore(b, a));
 
     /// <summary>The default order used for display and canonical term order: graded reverse lexicographic by first use.</summary>
     public static MonomialOrder Default { get; } = new(MonomialOrderKind.GradedReverseLexicographic);
@@ -64,10 +91,17 @@ public sealed class MonomialOrder : IComparer<Monomial>
     }
 
     /// <inheritdoc />
+    /// <remarks>Allocation-free; linear in the number of factors of the two monomials.</remarks>
     public int Compare(Monomial? x, Monomial? y)
     {
         ArgumentNullException.ThrowIfNull(x);
         ArgumentNullException.ThrowIfNull(y);
+        return CompareCore(x, y);
+    }
+
+    /// <summary>Compare without argument checks, for inner loops.</summary>
+    internal int CompareCore(Monomial x, Monomial y)
+    {
         if (ReferenceEquals(x, y))
         {
             return 0;
@@ -75,36 +109,127 @@ public sealed class MonomialOrder : IComparer<Monomial>
 
         if (Kind != MonomialOrderKind.Lexicographic && x.TotalDegree != y.TotalDegree)
         {
-            return x.TotalDegree.CompareTo(y.TotalDegree);
+            return x.TotalDegree < y.TotalDegree ? -1 : 1;
         }
 
-        // Walk the symbols of both monomials from highest rank (lex) or lowest rank (grevlex).
-        var symbols = x.Factors.Select(f => f.Symbol).Union(y.Factors.Select(f => f.Symbol)).ToList();
-        symbols.Sort((a, b) => CompareSymbols(b, a)); // highest rank first
+        return _keyById.Length == 0 ? CompareByFirstUse(x, y) : CompareRanked(x, y);
+    }
+
+    // Without a ranking, rank follows Id, which is also the storage order of factors: walk from the front (lex)
+    // or from the back (grevlex) and stop at the first difference.
+    private int CompareByFirstUse(Monomial x, Monomial y)
+    {
+        var xs = x.SymbolArray;
+        var ys = y.SymbolArray;
+        var xe = x.ExponentArray;
+        var ye = y.ExponentArray;
         if (Kind == MonomialOrderKind.GradedReverseLexicographic)
         {
-            for (var k = symbols.Count - 1; k >= 0; k--)
+            int i = xs.Length - 1, j = ys.Length - 1;
+            while (i >= 0 && j >= 0)
             {
-                var d = x.ExponentOf(symbols[k]) - y.ExponentOf(symbols[k]);
-                if (d != 0)
+                if (ReferenceEquals(xs[i], ys[j]))
                 {
-                    return d < 0 ? 1 : -1;
+                    if (xe[i] != ye[j])
+                    {
+                        return xe[i] < ye[j] ? 1 : -1;
+                    }
+
+                    i--;
+                    j--;
+                }
+                else
+                {
+                    // The lower-ranked symbol occurs in only one of them; that one is smaller.
+                    return xs[i].Id > ys[j].Id ? -1 : 1;
                 }
             }
 
-            return 0;
+            return i >= 0 ? -1 : j >= 0 ? 1 : 0;
         }
 
-        foreach (var symbol in symbols)
         {
-            var d = x.ExponentOf(symbol) - y.ExponentOf(symbol);
-            if (d != 0)
+            int i = 0, j = 0;
+            while (i < xs.Length && j < ys.Length)
             {
-                return d;
+                if (ReferenceEquals(xs[i], ys[j]))
+                {
+                    if (xe[i] != ye[j])
+                    {
+                        return xe[i] > ye[j] ? 1 : -1;
+                    }
+
+                    i++;
+                    j++;
+                }
+                else
+                {
+                    // The higher-ranked symbol occurs in only one of them; that one is larger.
+                    return xs[i].Id < ys[j].Id ? 1 : -1;
+                }
+            }
+
+            return i < xs.Length ? 1 : j < ys.Length ? -1 : 0;
+        }
+    }
+
+    // With a ranking, merge the factor lists by Id and keep the differing symbol of extreme rank.
+    private int CompareRanked(Monomial x, Monomial y)
+    {
+        var xs = x.SymbolArray;
+        var ys = y.SymbolArray;
+        var xe = x.ExponentArray;
+        var ye = y.ExponentArray;
+        var reverse = Kind == MonomialOrderKind.GradedReverseLexicographic;
+        var bestKey = reverse ? int.MinValue : int.MaxValue;
+        var bestDifference = 0;
+        int i = 0, j = 0;
+        while (i < xs.Length || j < ys.Length)
+        {
+            Symbol symbol;
+            int difference;
+            if (j == ys.Length || (i < xs.Length && xs[i].Id < ys[j].Id))
+            {
+                symbol = xs[i];
+                difference = xe[i++];
+            }
+            else if (i == xs.Length || ys[j].Id < xs[i].Id)
+            {
+                symbol = ys[j];
+                difference = -ye[j++];
+            }
+            else
+            {
+                symbol = xs[i];
+                difference = xe[i++] - ye[j++];
+            }
+
+            if (difference == 0)
+            {
+                continue;
+            }
+
+            var key = KeyOf(symbol);
+            if (reverse ? key > bestKey : key < bestKey)
+            {
+                bestKey = key;
+                bestDifference = difference;
             }
         }
 
-        return 0;
+        if (bestDifference == 0)
+        {
+            return 0;
+        }
+
+        return reverse ? (bestDifference < 0 ? 1 : -1) : (bestDifference > 0 ? 1 : -1);
+    }
+
+    // Smaller key = higher rank. Ranked symbols get their position; the others follow by Id.
+    private int KeyOf(Symbol symbol)
+    {
+        var id = symbol.Id;
+        return id < _keyById.Length ? _keyById[id] : Ranking.Count + id;
     }
 
     /// <inheritdoc />

@@ -1,0 +1,127 @@
+using System.Collections.Concurrent;
+using System.Reflection;
+using AlgebraNotebook.Display.Tree;
+using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Polynomials;
+using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.Exact.Symbols;
+
+namespace AlgebraNotebook.Display.Conversion;
+
+/// <summary>
+/// Finds the converter for a runtime type: an exact registration for the type or one of its base classes, or a
+/// registration for its open generic type definition (made concrete with <see cref="MethodInfo.MakeGenericMethod"/>
+/// once per closed type and cached). A generic registration applies only when every type argument is renderable.
+/// </summary>
+internal static class ConverterRegistry
+{
+    private static readonly ConcurrentDictionary<Type, Func<object, MathNode>> Exact = new();
+    private static readonly ConcurrentDictionary<Type, MethodInfo> Generic = new();
+    private static readonly ConcurrentDictionary<Type, Func<object, MathNode>?> Resolved = new();
+    private static readonly MethodInfo WrapDefinition =
+        typeof(ConverterRegistry).GetMethod(nameof(Wrap), BindingFlags.NonPublic | BindingFlags.Static)!;
+
+    static ConverterRegistry()
+    {
+        AddExact<Rational>(ScalarConverters.FromRational);
+        AddExact<GaussianRational>(ScalarConverters.FromGaussianRational);
+        AddExact<Symbol>(PolynomialConverters.FromSymbol);
+        AddExact<Monomial>(PolynomialConverters.FromMonomial);
+    }
+
+    public static void AddExact<TObject>(Func<TObject, MathNode> converter)
+    {
+        Exact[typeof(TObject)] = value => converter((TObject)value);
+        Resolved.Clear();
+    }
+
+    public static void AddGeneric(Type openGenericType, MethodInfo converterDefinition)
+    {
+        Generic[openGenericType] = converterDefinition;
+        Resolved.Clear();
+    }
+
+    public static bool CanConvert(Type type) => Resolve(type) is not null;
+
+    public static MathNode ToTree(object value)
+    {
+        ArgumentNullException.ThrowIfNull(value);
+        if (value is MathNode node)
+        {
+            return node;
+        }
+
+        var converter = Resolve(value.GetType())
+            ?? throw new ExactArgumentException(
+                $"Cannot display a value of type {Describe(value.GetType())}: no display converter is registered for it " +
+                "(register one with MathDisplay.Register or MathDisplay.RegisterGeneric).",
+                nameof(value));
+        return converter(value)
+            ?? throw new InvalidOperationException($"The display converter for {Describe(value.GetType())} returned null.");
+    }
+
+    /// <summary>A readable type name with generic arguments, e.g. Polynomial&lt;Rational&gt;.</summary>
+    public static string Describe(Type type)
+    {
+        if (!type.IsGenericType)
+        {
+            return type.Name;
+        }
+
+        var name = type.Name;
+        var tick = name.IndexOf('`');
+        return (tick >= 0 ? name[..tick] : name) + "<" + string.Join(", ", type.GetGenericArguments().Select(Describe)) + ">";
+    }
+
+    private static Func<object, MathNode>? Resolve(Type type)
+    {
+        if (typeof(MathNode).IsAssignableFrom(type))
+        {
+            return static value => (MathNode)value;
+        }
+
+        if (Resolved.TryGetValue(type, out var cached))
+        {
+            return cached;
+        }
+
+        var found = Find(type);
+        Resolved[type] = found;
+        return found;
+    }
+
+    private static Func<object, MathNode>? Find(Type type)
+    {
+        for (var current = type; current is not null && current != typeof(object); current = current.BaseType)
+        {
+            if (Exact.TryGetValue(current, out var exact))
+            {
+                return exact;
+            }
+
+            if (current.IsConstructedGenericType
+                && Generic.TryGetValue(current.GetGenericTypeDefinition(), out var definition)
+                && current.GetGenericArguments().All(CanConvert))
+            {
+                MethodInfo closed;
+                try
+                {
+                    closed = definition.MakeGenericMethod(current.GetGenericArguments());
+                }
+                catch (ArgumentException)
+                {
+                    // The type arguments violate the converter's constraints: not renderable by this converter.
+                    continue;
+                }
+
+                var parameterType = closed.GetParameters()[0].ParameterType;
+                var typed = closed.CreateDelegate(typeof(Func<,>).MakeGenericType(parameterType, typeof(MathNode)));
+                return (Func<object, MathNode>)WrapDefinition.MakeGenericMethod(parameterType).Invoke(null, [typed])!;
+            }
+        }
+
+        return null;
+    }
+
+    private static Func<object, MathNode> Wrap<TIn>(Func<TIn, MathNode> converter) => value => converter((TIn)value);
+}

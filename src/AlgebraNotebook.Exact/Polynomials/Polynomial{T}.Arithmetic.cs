@@ -1,0 +1,178 @@
+using AlgebraNotebook.Exact.Scalars;
+
+namespace AlgebraNotebook.Exact.Polynomials;
+
+public sealed partial class Polynomial<T>
+{
+    /// <summary>The sum; cost linear in the number of terms.</summary>
+    public static Polynomial<T> operator +(Polynomial<T> left, Polynomial<T> right)
+    {
+        ArgumentNullException.ThrowIfNull(left);
+        ArgumentNullException.ThrowIfNull(right);
+        if (left.IsZero)
+        {
+            return right;
+        }
+
+        if (right.IsZero)
+        {
+            return left;
+        }
+
+        return FromArrays(TermArithmetic<T>.AddScaledShifted(
+            left._monomials, left._coefficients, 0, right._monomials, right._coefficients, T.One, Monomial.One, MonomialOrder.Default));
+    }
+
+    /// <summary>The difference.</summary>
+    public static Polynomial<T> operator -(Polynomial<T> left, Polynomial<T> right)
+    {
+        ArgumentNullException.ThrowIfNull(left);
+        ArgumentNullException.ThrowIfNull(right);
+        if (right.IsZero)
+        {
+            return left;
+        }
+
+        return FromArrays(TermArithmetic<T>.AddScaledShifted(
+            left._monomials, left._coefficients, 0, right._monomials, right._coefficients, -T.One, Monomial.One, MonomialOrder.Default));
+    }
+
+    /// <summary>The negative.</summary>
+    public static Polynomial<T> operator -(Polynomial<T> value)
+    {
+        ArgumentNullException.ThrowIfNull(value);
+        return value.IsZero ? value : new Polynomial<T>(value._monomials, TermArithmetic<T>.Scale(value._coefficients, -T.One));
+    }
+
+    /// <summary>The product; cost proportional to the product of the term counts.</summary>
+    public static Polynomial<T> operator *(Polynomial<T> left, Polynomial<T> right)
+    {
+        ArgumentNullException.ThrowIfNull(left);
+        ArgumentNullException.ThrowIfNull(right);
+        return FromArrays(TermArithmetic<T>.Multiply(
+            left._monomials, left._coefficients, right._monomials, right._coefficients, MonomialOrder.Default));
+    }
+
+    /// <summary>The polynomial multiplied by a scalar.</summary>
+    public static Polynomial<T> operator *(T factor, Polynomial<T> value)
+    {
+        ArgumentNullException.ThrowIfNull(value);
+        return value.MultiplyByScalar(factor);
+    }
+
+    /// <summary>The polynomial multiplied by a scalar.</summary>
+    public static Polynomial<T> operator *(Polynomial<T> value, T factor)
+    {
+        ArgumentNullException.ThrowIfNull(value);
+        return value.MultiplyByScalar(factor);
+    }
+
+    /// <summary>The polynomial divided by a non-zero scalar.</summary>
+    /// <exception cref="DivideByZeroException">The divisor is zero.</exception>
+    public static Polynomial<T> operator /(Polynomial<T> value, T divisor)
+    {
+        ArgumentNullException.ThrowIfNull(value);
+        if (divisor.IsZero)
+        {
+            throw new DivideByZeroException($"Cannot divide the polynomial {value} by the scalar 0.");
+        }
+
+        return value.MultiplyByScalar(divisor.Reciprocal());
+    }
+
+    /// <inheritdoc />
+    public Polynomial<T> Scale(Rational factor) => MultiplyByScalar(T.FromRational(factor));
+
+    /// <summary>The polynomial multiplied by the monomial <paramref name="monomial"/> times <paramref name="coefficient"/>.</summary>
+    public Polynomial<T> MultiplyByTerm(T coefficient, Monomial monomial)
+    {
+        ArgumentNullException.ThrowIfNull(monomial);
+        if (coefficient.IsZero || IsZero)
+        {
+            return ZeroInstance;
+        }
+
+        return FromArrays(TermArithmetic<T>.AddScaledShifted([], [], 0, _monomials, _coefficients, coefficient, monomial, MonomialOrder.Default));
+    }
+
+    /// <summary>
+    /// The polynomial with every coefficient conjugated; variables are treated as real (so conj(i*x) = -i*x).
+    /// For real coefficient fields this is the polynomial itself.
+    /// </summary>
+    public Polynomial<T> Conjugate()
+    {
+        var changed = false;
+        var conjugated = new T[_coefficients.Length];
+        for (var k = 0; k < conjugated.Length; k++)
+        {
+            conjugated[k] = _coefficients[k].Conjugate();
+            changed |= !conjugated[k].Equals(_coefficients[k]);
+        }
+
+        return changed ? new Polynomial<T>(_monomials, conjugated) : this;
+    }
+
+    /// <summary>The polynomial to a non-negative integer power (by repeated squaring; p^0 = 1, including 0^0).</summary>
+    /// <exception cref="ExactArgumentException">The exponent is negative.</exception>
+    public Polynomial<T> Pow(int exponent)
+    {
+        if (exponent < 0)
+        {
+            throw new ExactArgumentException(
+                $"Exponent {exponent} is negative; polynomials have only non-negative integer powers (polynomial {this}).", nameof(exponent));
+        }
+
+        if (_monomials.Length == 1)
+        {
+            return new Polynomial<T>([_monomials[0].Pow(exponent)], [PowScalar(_coefficients[0], exponent)]);
+        }
+
+        var result = OneInstance;
+        var power = this;
+        while (exponent > 0)
+        {
+            if ((exponent & 1) != 0)
+            {
+                result *= power;
+            }
+
+            exponent >>= 1;
+            if (exponent > 0)
+            {
+                power *= power;
+            }
+        }
+
+        return result;
+    }
+
+    private static T PowScalar(T value, int exponent)
+    {
+        var result = T.One;
+        while (exponent > 0)
+        {
+            if ((exponent & 1) != 0)
+            {
+                result *= value;
+            }
+
+            exponent >>= 1;
+            if (exponent > 0)
+            {
+                value *= value;
+            }
+        }
+
+        return result;
+    }
+
+    private Polynomial<T> MultiplyByScalar(T factor)
+    {
+        if (factor.IsZero || IsZero)
+        {
+            return ZeroInstance;
+        }
+
+        return factor.IsOne ? this : new Polynomial<T>(_monomials, TermArithmetic<T>.Scale(_coefficients, factor));
+    }
+}

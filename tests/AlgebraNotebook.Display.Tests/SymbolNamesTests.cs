@@ -1,0 +1,71 @@
+using AlgebraNotebook.Exact.Polynomials;
+using AlgebraNotebook.Exact.Symbols;
+
+namespace AlgebraNotebook.Display.Tests;
+
+public class SymbolNamesTests
+{
+    [Theory]
+    [InlineData("J_x", "J", "x")]
+    [InlineData("x_12", "x", "12")]
+    [InlineData("t1", "t", "1")]
+    [InlineData("omega12", "omega", "12")]
+    [InlineData("alpha", "alpha", null)]
+    [InlineData("x", "x", null)]
+    [InlineData("x_", "x_", null)]
+    [InlineData("a_b_c", "a", "b_c")]
+    public void Split_follows_the_documented_convention(string name, string expectedBase, string? expectedSubscript)
+    {
+        // The convention documented on SymbolNames (our own, modelled on LaTeX's subscript underscore: common practice).
+        Assert.Equal((expectedBase, expectedSubscript), SymbolNames.Split(name));
+    }
+
+    [Theory]
+    [InlineData("alpha", "<mi>α</mi>", @"\alpha")]
+    [InlineData("Omega", "<mi mathvariant=\"normal\">Ω</mi>", @"\Omega")]
+    [InlineData("hbar", "<mi>ℏ</mi>", @"\hbar")]
+    [InlineData("J_x", "<msub><mi>J</mi><mi>x</mi></msub>", "J_{x}")]
+    [InlineData("x_12", "<msub><mi>x</mi><mn>12</mn></msub>", "x_{12}")]
+    [InlineData("t1", "<msub><mi>t</mi><mn>1</mn></msub>", "t_{1}")]
+    [InlineData("theta_1", "<msub><mi>θ</mi><mn>1</mn></msub>", @"\theta_{1}")]
+    [InlineData("J_alpha", "<msub><mi>J</mi><mi>α</mi></msub>", @"J_{\alpha}")]
+    [InlineData("mass", "<mi>mass</mi>", @"\mathrm{mass}")]
+    public void Symbol_names_map_to_typeset_glyphs(string name, string mathmlBody, string latex)
+    {
+        // Greek letters and ℏ: Unicode code charts (Greek and Coptic U+0370-03FF; U+210F PLANCK CONSTANT OVER TWO PI)
+        // and the LaTeX symbol list (The Comprehensive LaTeX Symbol List, tables of greek letters); capitals upright: TeXbook ch. 16.
+        var symbol = Symbol.Of(name);
+        Assert.Equal($"<math display=\"block\" xmlns=\"http://www.w3.org/1998/Math/MathML\">{mathmlBody}</math>", MathDisplay.ToMathML(symbol));
+        Assert.Equal(latex, MathDisplay.ToLatex(symbol));
+        Assert.Equal(name, MathDisplay.ToPlainText(symbol));
+    }
+
+    [Fact]
+    public void Every_lower_case_greek_name_has_a_glyph_in_the_greek_block()
+    {
+        // The 24 letter names of the Greek alphabet: common practice.
+        string[] names = ["alpha", "beta", "gamma", "delta", "epsilon", "zeta", "eta", "theta", "iota", "kappa", "lambda", "mu",
+            "nu", "xi", "omicron", "pi", "rho", "sigma", "tau", "upsilon", "phi", "chi", "psi", "omega"];
+        foreach (var name in names)
+        {
+            Assert.True(SymbolNames.TryGetGlyph(name, out var glyph, out _, out var upright), name);
+            Assert.InRange(glyph[0], '\u0370', '\u03FF');
+            Assert.False(upright, name);
+            var capital = char.ToUpperInvariant(name[0]) + name[1..];
+            Assert.True(SymbolNames.TryGetGlyph(capital, out var capitalGlyph, out _, out var capitalUpright), capital);
+            Assert.InRange(capitalGlyph[0], '\u0391', '\u03A9');
+            Assert.True(capitalUpright, capital);
+        }
+    }
+
+    [Fact]
+    public void Monomial_shows_powers_and_juxtaposition()
+    {
+        // x^2 y as msup and juxtaposition with invisible times U+2062 (W3C MathML Core, 3.2.5; Unicode U+2062).
+        var monomial = Monomial.FromFactors([(Symbol.Of("u"), 2), (Symbol.Of("v"), 1)]);
+        Assert.Equal("u^2*v", MathDisplay.ToPlainText(monomial));
+        Assert.Equal("u^{2} v", MathDisplay.ToLatex(monomial));
+        Assert.Contains("<msup><mi>u</mi><mn>2</mn></msup><mo>&#x2062;</mo><mi>v</mi>", MathDisplay.ToMathML(monomial));
+        Assert.Equal("1", MathDisplay.ToPlainText(Monomial.One));
+    }
+}
