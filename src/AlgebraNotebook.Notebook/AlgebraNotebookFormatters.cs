@@ -1,7 +1,6 @@
 using System.Reflection;
 using AlgebraNotebook.Display;
 using AlgebraNotebook.Display.Tree;
-using AlgebraNotebook.Exact;
 using Microsoft.DotNet.Interactive.Formatting;
 
 namespace AlgebraNotebook.Notebook;
@@ -30,12 +29,13 @@ public static class AlgebraNotebookFormatters
     private static readonly object Gate = new();
 
     /// <summary>
-    /// The types that get formatters: every public, non-static, non-nested class or struct of AlgebraNotebook.Exact
-    /// that is not an exception, attribute, delegate, enum or interface (generic types appear as open definitions such
-    /// as Matrix`1), plus the display tree base <see cref="MathNode"/> (and so every node type). Sorted by full name.
+    /// The types that get formatters: every public, non-static, non-nested class or struct of the
+    /// <see cref="AlgebraNotebookNamespaces.MathematicsAssemblies"/> that is not an exception, attribute, delegate, enum
+    /// or interface (generic types appear as open definitions such as Matrix`1), plus the display tree base
+    /// <see cref="MathNode"/> (and so every node type). Sorted by full name.
     /// </summary>
-    public static IReadOnlyList<Type> RegisteredTypes { get; } = typeof(ExactArgumentException).Assembly
-        .GetExportedTypes()
+    public static IReadOnlyList<Type> RegisteredTypes { get; } = AlgebraNotebookNamespaces.MathematicsAssemblies
+        .SelectMany(a => a.GetExportedTypes())
         .Where(IsFormattedType)
         .Append(typeof(MathNode))
         .OrderBy(t => t.FullName, StringComparer.Ordinal)
