@@ -25,7 +25,7 @@ public static class RunnerApp
         algebra-notebook - run a C# notebook with AlgebraNotebook loaded and write an offline HTML report
 
         Usage:
-          algebra-notebook run <notebook.ipynb|notebook.dib> [--output <report.html>]
+          algebra-notebook run <notebook.ipynb|notebook.dib> [--output <report.html>] [--cell-timeout <seconds>]
           algebra-notebook --help
 
         run       Executes every C# code cell in order in an in-process kernel, keeps the Markdown
@@ -34,6 +34,9 @@ public static class RunnerApp
                   The report path is printed on standard output; failing cells are listed on
                   standard error as "cell N: message" (N counts all cells from 1).
           --output, -o <path>   Where to write the report.
+          --cell-timeout <seconds>
+                                Longest time one code cell may run (default: no limit). A cell
+                                that runs longer fails, and the code cells after it are not run.
           --help, -h            Show this text.
 
         Cells can use the AlgebraNotebook types directly: a using directive for every namespace of
@@ -75,6 +78,7 @@ public static class RunnerApp
 
         string? notebook = null;
         string? output = null;
+        TimeSpan? cellTimeout = null;
         for (var i = 1; i < args.Length; i++)
         {
             var arg = args[i];
@@ -100,6 +104,21 @@ public static class RunnerApp
 
                 output = args[++i];
             }
+            else if (arg == "--cell-timeout")
+            {
+                if (i + 1 >= args.Length
+                    || !double.TryParse(args[i + 1], System.Globalization.NumberStyles.Float,
+                        System.Globalization.CultureInfo.InvariantCulture, out var seconds)
+                    || !(seconds > 0) || seconds > TimeSpan.MaxValue.TotalSeconds / 2)
+                {
+                    var given = i + 1 < args.Length ? $"'{args[i + 1]}'" : "nothing";
+                    await stderr.WriteLineAsync($"algebra-notebook run: option '--cell-timeout' needs a positive number of seconds, got {given}.").ConfigureAwait(false);
+                    return ExitUsageError;
+                }
+
+                cellTimeout = TimeSpan.FromSeconds(seconds);
+                i++;
+            }
             else if (arg.StartsWith('-') && arg.Length > 1)
             {
                 await stderr.WriteLineAsync($"algebra-notebook run: unknown option '{arg}'.").ConfigureAwait(false);
@@ -122,7 +141,7 @@ public static class RunnerApp
             return ExitUsageError;
         }
 
-        return await RunNotebookAsync(notebook, output, stdout, stderr, cancellationToken).ConfigureAwait(false);
+        return await RunNotebookAsync(notebook, output, cellTimeout, stdout, stderr, cancellationToken).ConfigureAwait(false);
     }
 
     /// <summary>The default report path: the notebook's path with its extension replaced by .html.</summary>
@@ -130,8 +149,8 @@ public static class RunnerApp
     /// <returns>The report path.</returns>
     public static string DefaultReportPath(string notebookPath) => Path.ChangeExtension(notebookPath, ".html");
 
-    private static async Task<int> RunNotebookAsync(string notebookPath, string? outputPath, TextWriter stdout,
-        TextWriter stderr, CancellationToken cancellationToken)
+    private static async Task<int> RunNotebookAsync(string notebookPath, string? outputPath, TimeSpan? cellTimeout,
+        TextWriter stdout, TextWriter stderr, CancellationToken cancellationToken)
     {
         IReadOnlyList<NotebookCell> cells;
         try
@@ -147,7 +166,7 @@ public static class RunnerApp
         var reportPath = Path.GetFullPath(outputPath ?? DefaultReportPath(notebookPath));
         var runDate = DateTimeOffset.UtcNow;
         IReadOnlyList<CellResult> results;
-        using (var executor = new NotebookExecutor())
+        using (var executor = new NotebookExecutor(cellTimeout))
         {
             results = await executor.RunAsync(cells, cancellationToken).ConfigureAwait(false);
         }

@@ -75,6 +75,26 @@ public class RunnerAppTests
     }
 
     [Fact]
+    public async Task A_cell_over_the_time_limit_fails_and_later_code_cells_are_reported_as_not_run()
+    {
+        using var temp = new TempNotebook();
+        // The sleeping cell costs no processor time; its thread is abandoned when the limit passes.
+        var path = temp.WriteIpynb("slow.ipynb",
+            ("code", "Console.WriteLine(\"before\");", null),
+            ("code", "System.Threading.Thread.Sleep(System.Threading.Timeout.Infinite);", null),
+            ("code", "Console.WriteLine(\"after\");", null),
+            ("markdown", "closing *prose*", null));
+        var (code, _, stderr) = await Run("run", path, "--cell-timeout", "1");
+        Assert.Equal(1, code);
+        Assert.Contains("cell 2: The cell did not finish within the time limit of 1 s.", stderr);
+        Assert.Contains("cell 3: Not run: cell 2 did not finish within its time limit", stderr);
+        var html = File.ReadAllText(Path.Combine(temp.Folder, "slow.html"));
+        Assert.Contains("<pre>before</pre>", html);
+        Assert.DoesNotContain("<pre>after</pre>", html);
+        Assert.Contains("closing <em>prose</em>", html);
+    }
+
+    [Fact]
     public async Task Missing_notebook_gives_exit_code_2_and_names_the_file()
     {
         var path = Path.Combine(Path.GetTempPath(), "absent-" + Guid.NewGuid().ToString("N") + ".ipynb");
@@ -102,6 +122,8 @@ public class RunnerAppTests
     [InlineData(new[] { "run", "a.ipynb", "--output" }, "option '--output' needs a file path")]
     [InlineData(new[] { "run", "a.ipynb", "--fast" }, "unknown option '--fast'")]
     [InlineData(new[] { "run", "a.ipynb", "b.ipynb" }, "unexpected extra argument 'b.ipynb'")]
+    [InlineData(new[] { "run", "a.ipynb", "--cell-timeout", "0" }, "option '--cell-timeout' needs a positive number of seconds, got '0'")]
+    [InlineData(new[] { "run", "a.ipynb", "--cell-timeout" }, "option '--cell-timeout' needs a positive number of seconds, got nothing")]
     public async Task Usage_errors_give_exit_code_2_and_say_what_is_wrong(string[] args, string expected)
     {
         var (code, _, stderr) = await Run(args);

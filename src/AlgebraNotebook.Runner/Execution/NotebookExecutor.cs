@@ -21,11 +21,25 @@ namespace AlgebraNotebook.Runner.Execution;
 public sealed class NotebookExecutor : IDisposable
 {
     private readonly CompositeKernel kernel;
+    private readonly TimeSpan? cellTimeout;
     private bool prepared;
+    private int? stuckCell;
 
     /// <summary>Creates the kernel (about one second) and registers the formatters; nothing is executed yet.</summary>
-    public NotebookExecutor()
+    /// <param name="cellTimeout">
+    /// Longest time one code cell may run; null (the default) waits without limit. A cell that exceeds it is reported
+    /// as failed, and because an in-process kernel cannot abort running code, every later code cell is reported as not
+    /// run. The abandoned cell keeps its thread until the process ends.
+    /// </param>
+    /// <exception cref="ArgumentOutOfRangeException"><paramref name="cellTimeout"/> is zero or negative.</exception>
+    public NotebookExecutor(TimeSpan? cellTimeout = null)
     {
+        if (cellTimeout is { } limit && limit <= TimeSpan.Zero)
+        {
+            throw new ArgumentOutOfRangeException(nameof(cellTimeout), limit, "The cell time limit must be positive.");
+        }
+
+        this.cellTimeout = cellTimeout;
         AlgebraNotebookFormatters.Register();
         var csharp = new CSharpKernel().UseKernelHelpers().UseValueSharing();
         csharp.AddAssemblyReferences(AlgebraNotebookNamespaces.AssemblyPaths);
@@ -58,8 +72,14 @@ public sealed class NotebookExecutor : IDisposable
         return results;
     }
 
-    /// <summary>Disposes the kernel.</summary>
-    public void Dispose() => kernel.Dispose();
+    /// <summary>Disposes the kernel, unless a cell exceeded its time limit (disposing a busy kernel could block).</summary>
+    public void Dispose()
+    {
+        if (stuckCell is null)
+        {
+            kernel.Dispose();
+        }
+    }
 
     private async Task PrepareAsync()
     {
@@ -86,7 +106,22 @@ public sealed class NotebookExecutor : IDisposable
             return new CellResult(cell, Array.Empty<CellOutput>(), null);
         }
 
-        var result = await kernel.SendAsync(new SubmitCode(cell.Source)).ConfigureAwait(false);
+        if (stuckCell is { } stuck)
+        {
+            return new CellResult(cell, Array.Empty<CellOutput>(),
+                $"Not run: cell {stuck} did not finish within its time limit and is still occupying the kernel.");
+        }
+
+        var submission = kernel.SendAsync(new SubmitCode(cell.Source));
+        if (cellTimeout is { } limit
+            && await Task.WhenAny(submission, Task.Delay(limit)).ConfigureAwait(false) != submission)
+        {
+            stuckCell = cell.Number;
+            return new CellResult(cell, Array.Empty<CellOutput>(),
+                $"The cell did not finish within the time limit of {limit.TotalSeconds.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} s.");
+        }
+
+        var result = await submission.ConfigureAwait(false);
         var outputs = new List<CellOutput>();
         var errors = new List<string>();
         string? failure = null;
