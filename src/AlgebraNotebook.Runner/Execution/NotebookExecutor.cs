@@ -10,13 +10,15 @@ namespace AlgebraNotebook.Runner.Execution;
 
 /// <summary>
 /// Runs notebook cells headlessly in an in-process kernel: a CompositeKernel holding one CSharpKernel with kernel
-/// helpers and value sharing, the AlgebraNotebook.Exact and AlgebraNotebook.Display assemblies referenced, the
-/// AlgebraNotebook formatters registered, and a using directive for every namespace of those assemblies submitted
-/// before the first cell (see <see cref="AlgebraNotebookNamespaces.All"/>).
+/// helpers and value sharing, the AlgebraNotebook assemblies referenced (<see cref="AlgebraNotebookNamespaces.Assemblies"/>:
+/// Exact, the other mathematics layers the display layer uses, and Display), the AlgebraNotebook formatters registered,
+/// and a using directive for every namespace of those assemblies submitted before the first cell
+/// (<see cref="AlgebraNotebookNamespaces.All"/>).
 /// </summary>
 /// <remarks>
 /// Cells run in document order. A failing cell does not stop the run: later cells still execute (they may fail in turn
-/// if they depend on the failed one). Outputs prefer text/html and fall back to text/plain.
+/// if they depend on the failed one). Outputs prefer text/html and fall back to text/plain. Calling
+/// <see cref="RunAsync"/> again continues in the same kernel, with the variables of the earlier run still defined.
 /// </remarks>
 public sealed class NotebookExecutor : IDisposable
 {
