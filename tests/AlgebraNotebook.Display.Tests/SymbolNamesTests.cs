@@ -43,6 +43,16 @@ public class SymbolNamesTests
     }
 
     [Fact]
+    public void Power_of_a_subscripted_name_stacks_the_exponent_over_the_subscript()
+    {
+        // x_1^2 sets both scripts on the base (TeXbook ch. 17; MathML Core 3.4.1 msubsup).
+        var power = AlgebraNotebook.Display.Tree.MathNodes.Power(AlgebraNotebook.Display.Tree.MathNodes.Symbol("omega12"), 2);
+        Assert.Contains("<msubsup><mi>ω</mi><mn>12</mn><mn>2</mn></msubsup>", MathDisplay.ToMathML(power));
+        Assert.Equal(@"\omega_{12}^{2}", MathDisplay.ToLatex(power));
+        Assert.Equal("omega12^2", MathDisplay.ToPlainText(power));
+    }
+
+    [Fact]
     public void Every_lower_case_greek_name_has_a_glyph_in_the_greek_block()
     {
         // The 24 letter names of the Greek alphabet: common practice.
