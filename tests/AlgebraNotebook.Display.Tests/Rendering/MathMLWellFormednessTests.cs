@@ -30,7 +30,7 @@ public class MathMLWellFormednessTests
     [MemberData(nameof(Samples))]
     public void MathML_parses_as_xml_with_a_math_root_in_the_MathML_namespace(string description, object value)
     {
-        // The root element and namespace required by MathML: W3C MathML Core, section 2.1 (the top-level <math> element).
+        // The root element and namespace required by MathML: W3C MathML Core, the top-level <math> element (from memory).
         var mathml = MathDisplay.ToMathML(value);
         XDocument document;
         try
@@ -51,7 +51,7 @@ public class MathMLWellFormednessTests
     [MemberData(nameof(Samples))]
     public void Script_and_fraction_elements_have_exactly_two_children(string description, object value)
     {
-        // mfrac, msup and msub take exactly two children, msubsup three: W3C MathML Core, sections 3.3.2 and 3.4.1.
+        // mfrac, msup and msub take exactly two children, msubsup three: W3C MathML Core (from memory).
         var document = XDocument.Parse(MathDisplay.ToMathML(value));
         foreach (var element in document.Descendants().Where(e => e.Name.LocalName is "mfrac" or "msup" or "msub" or "msubsup"))
         {
@@ -80,7 +80,7 @@ public class MathMLWellFormednessTests
     [Fact]
     public void Markup_characters_in_text_are_escaped_in_LaTeX()
     {
-        // LaTeX special characters # $ % & _ { } \ ^ ~ (Lamport, LaTeX: A Document Preparation System, 2nd ed., section 2.2.1).
+        // LaTeX special characters # $ % & _ { } \ ^ ~ (Lamport, LaTeX: A Document Preparation System, 2nd ed., special characters; from memory).
         var latex = MathDisplay.ToLatex(MathNodes.Text(@"50% of {a_b} & #1 \ $"));
         Assert.Equal(@"\text{50\% of \{a\_b\} \& \#1 \textbackslash{} \$}", latex);
     }
