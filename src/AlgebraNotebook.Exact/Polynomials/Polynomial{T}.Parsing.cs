@@ -9,6 +9,8 @@ public sealed partial class Polynomial<T>
     /// non-negative integer powers with '^', parentheses, rational or decimal numbers, division by non-zero numbers.
     /// For GaussianRational coefficients the name <c>i</c> is the imaginary unit ("(1 - 2 i) x"); for Rational it is
     /// an error. Names are letters followed by letters, digits or underscores ("xy" is one name; write "x y" or "x*y").
+    /// Juxtaposition binds like '*', left to right, so "x/2 y" is (x/2)*y; powers bind tighter than a leading minus
+    /// ("-x^2" is -(x^2)); repeated '^' must be parenthesised.
     /// </summary>
     /// <example><c>Polynomial&lt;Rational&gt;.Parse("x^2*y - 2*hbar")</c></example>
     /// <exception cref="ExactParseException">

@@ -47,7 +47,7 @@ internal static class Reduction<T>
                 var factor = leadInverse[k].IsOne ? pc[start] : pc[start] * leadInverse[k];
                 quotients?[k].Add((shift, factor));
 
-                // p - factor*shift*g cancels the leading term; skip it explicitly to avoid relying on exact cancellation order.
+                // The leading terms cancel exactly, so both are skipped rather than subtracted.
                 (pm, pc) = TermArithmetic<T>.AddScaledShifted(pm, pc, start + 1, gm[1..], gc[1..], -factor, shift, order);
                 start = 0;
                 divided = true;

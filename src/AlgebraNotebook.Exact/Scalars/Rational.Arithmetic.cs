@@ -131,7 +131,9 @@ public readonly partial struct Rational
     public BigInteger Ceiling() => -(-this).Floor();
 
     /// <summary>
-    /// The nearest double. Converts by scaling, so huge numerators and denominators do not overflow to NaN.
+    /// The nearest double (ties to even), also for subnormal results. Converts by scaling, so huge numerators and
+    /// denominators do not overflow to NaN; values beyond the double range give an infinity, values below half the
+    /// smallest subnormal give 0.
     /// </summary>
     public double ToDouble()
     {
@@ -142,10 +144,32 @@ public readonly partial struct Rational
 
         var n = BigInteger.Abs(_numerator);
         var d = Denominator;
-        // Scale so that the integer quotient carries 64 significant bits.
-        var shift = (long)d.GetBitLength() - (long)n.GetBitLength() + 64;
-        var q = shift >= 0 ? (n << (int)shift) / d : n / (d << (int)(-shift));
-        var value = Math.ScaleB((double)q, (int)-shift);
+        // Scale so that the integer quotient q = floor(n * 2^shift / d) has at least 54 bits, keep a sticky bit for the
+        // remainder, and round once to 53 bits (fewer when the result is subnormal), so no double rounding occurs.
+        var shift = 54 - ((long)n.GetBitLength() - (long)d.GetBitLength());
+        var q = shift >= 0
+            ? BigInteger.DivRem(n << (int)shift, d, out var remainder)
+            : BigInteger.DivRem(n, d << (int)(-shift), out remainder);
+        var extra = Math.Max((long)q.GetBitLength() - 53, -1074 + shift);
+        BigInteger mantissa;
+        if (extra > q.GetBitLength() + 1)
+        {
+            mantissa = BigInteger.Zero;
+        }
+        else
+        {
+            mantissa = q >> (int)extra;
+            var dropped = q - (mantissa << (int)extra);
+            var half = BigInteger.One << (int)(extra - 1);
+            var comparison = dropped.CompareTo(half);
+            if (comparison > 0 || (comparison == 0 && (!remainder.IsZero || !mantissa.IsEven)))
+            {
+                mantissa += BigInteger.One;
+            }
+        }
+
+        var exponent = extra - shift;
+        var value = exponent > 2000 ? double.PositiveInfinity : Math.ScaleB((double)mantissa, (int)exponent);
         return _numerator.Sign < 0 ? -value : value;
     }
 

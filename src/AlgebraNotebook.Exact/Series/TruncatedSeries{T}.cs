@@ -25,8 +25,10 @@ namespace AlgebraNotebook.Exact.Series;
 /// <see cref="One"/> are exact and combine with any series; multiplying by an exact zero gives an exact zero.
 /// </para>
 /// <para>
-/// Coefficients may be any Q-algebra element (rationals, Gaussian rationals, polynomials...). The parameters commute
-/// with the coefficients; products keep the left factor's coefficient on the left.
+/// Coefficients may be any Q-algebra element (rationals, Gaussian rationals, polynomials, even series). The parameters
+/// commute with the coefficients; products keep the left factor's coefficient on the left. The recurrences behind
+/// Exp, Log, Sin, Cos, Reciprocal and fractional powers assume commuting coefficients, as <see cref="IRingElement{T}"/>
+/// promises.
 /// </para>
 /// </remarks>
 /// <example><c>TruncatedSeries&lt;Rational&gt;.Parameter("t", 3).Exp().ToString() == "1 + t + 1/2*t^2 + O(t^3)"</c></example>

@@ -29,6 +29,9 @@ public class GaussianRationalAxiomTests
     public void Integers_embed_as_a_ring_map() => _axioms.CheckIntegerEmbedding();
 
     [Fact]
+    public void Conjugation_is_an_involutive_ring_map() => _axioms.CheckConjugation();
+
+    [Fact]
     public void Rational_scaling_is_multiplication() => _axioms.CheckRationalScaling();
 
     [Fact]

@@ -44,6 +44,7 @@ public class RingAxioms<T>
         CheckAdditiveInverses();
         CheckEqualityAndHashing();
         CheckIntegerEmbedding();
+        CheckConjugation();
     }
 
     /// <summary>(a + b) + c = a + (b + c) and a + b = b + a.</summary>
@@ -138,6 +139,18 @@ public class RingAxioms<T>
             Assert.True(T.FromInteger(m) * T.FromInteger(n) == T.FromInteger(m * n), $"FromInteger is not multiplicative for m = {m}, n = {n}");
             Assert.True(-T.FromInteger(m) == T.FromInteger(-m), $"FromInteger does not commute with negation for m = {m}");
         }
+    }
+
+    /// <summary>Conjugation is an involutive ring map: it respects sums and products, fixes 1, and undoes itself.</summary>
+    public void CheckConjugation()
+    {
+        Assert.True(T.One.Conjugate() == T.One, "Conjugate(1) != 1");
+        ForTriples(10, (a, b, _) =>
+        {
+            Assert.True(a.Conjugate().Conjugate() == a, $"conj(conj(a)) != a for a = {a}");
+            Assert.True((a + b).Conjugate() == a.Conjugate() + b.Conjugate(), $"conj(a + b) != conj(a) + conj(b) for a = {a}, b = {b}");
+            Assert.True((a * b).Conjugate() == a.Conjugate() * b.Conjugate(), $"conj(a*b) != conj(a)*conj(b) for a = {a}, b = {b}");
+        });
     }
 
     /// <summary>Runs <paramref name="check"/> on random single elements.</summary>

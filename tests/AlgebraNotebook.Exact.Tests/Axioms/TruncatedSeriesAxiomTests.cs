@@ -70,5 +70,8 @@ public class TruncatedSeriesAxiomTests
     public void Integers_embed_as_exact_constants() => _axioms.CheckIntegerEmbedding();
 
     [Fact]
+    public void Conjugation_is_an_involutive_ring_map() => _axioms.CheckConjugation();
+
+    [Fact]
     public void Rational_scaling_is_multiplication_by_a_constant() => _axioms.CheckRationalScaling();
 }

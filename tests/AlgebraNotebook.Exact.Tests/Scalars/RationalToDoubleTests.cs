@@ -31,7 +31,7 @@ public class RationalToDoubleTests
     }
 
     [Fact]
-    public void Small_fractions_match_the_correctly_rounded_IEEE_quotient()
+    public void Small_fractions_give_exactly_the_correctly_rounded_IEEE_quotient()
     {
         // For |n|, d below 2^53 both are exact doubles and IEEE 754 division rounds n/d correctly.
         var random = Axioms.RandomisedTesting.NewRandom(104);
@@ -41,11 +41,26 @@ public class RationalToDoubleTests
             var d = random.NextInt64(1, 1L << 52);
             var expected = (double)n / d;
             var actual = new Rational(n, d).ToDouble();
-            Assert.True(Math.Abs(actual - expected) <= Math.Abs(expected) * 2.3e-16,
-                $"ToDouble({n}/{d}) = {actual:R}, IEEE quotient {expected:R}");
+            Assert.True(actual == expected, $"ToDouble({n}/{d}) = {actual:R}, IEEE quotient {expected:R}");
         }
 
         Assert.Equal(-0.75, new Rational(-3, 4).ToDouble());
         Assert.Equal(0.0, Rational.Zero.ToDouble());
+    }
+
+    [Fact]
+    public void Halfway_cases_round_to_even()
+    {
+        // IEEE 754 round-to-nearest, ties-to-even (common practice): 2^53 + 1 lies halfway between 2^53 and 2^53 + 2.
+        var twoTo53 = BigInteger.Pow(2, 53);
+        Assert.Equal(9007199254740992.0, new Rational(twoTo53 + 1).ToDouble());
+        Assert.Equal(9007199254740996.0, new Rational(twoTo53 + 3).ToDouble());
+        // 2^53 + 3/2 is nearer to 2^53 + 2 than to 2^53.
+        Assert.Equal(9007199254740994.0, new Rational(2 * twoTo53 + 3, 2).ToDouble());
+        // Subnormal: 3 * 2^-1075 is halfway between 2^-1074 and 2 * 2^-1074 and rounds to the even 2 * 2^-1074.
+        Assert.Equal(2 * double.Epsilon, new Rational(3, BigInteger.Pow(2, 1075)).ToDouble());
+        Assert.Equal(double.Epsilon, new Rational(1, BigInteger.Pow(2, 1074)).ToDouble());
+        Assert.Equal(0.0, new Rational(1, BigInteger.Pow(2, 1075)).ToDouble());
+        Assert.Equal(double.MaxValue, new Rational(new BigInteger(double.MaxValue)).ToDouble());
     }
 }
