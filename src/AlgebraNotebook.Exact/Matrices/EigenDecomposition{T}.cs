@@ -49,7 +49,7 @@ public sealed class EigenDecomposition<T>
 
     /// <summary>
     /// When diagonalisable: the matrix P whose columns are the eigenspace bases in the order of <see cref="Eigenvalues"/>,
-    /// so that P^-1 A P is diagonal with the eigenvalues repeated by multiplicity; otherwise null.
+    /// so that P^-1 A P is diagonal with the eigenvalues repeated by multiplicity; otherwise (and for the 0x0 matrix) null.
     /// </summary>
     public Matrix<T>? EigenvectorMatrix =>
         IsDiagonalisable && Matrix.RowCount > 0

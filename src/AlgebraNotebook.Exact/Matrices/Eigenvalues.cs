@@ -4,14 +4,22 @@ namespace AlgebraNotebook.Exact.Matrices;
 
 /// <summary>
 /// Exact eigenvalues in Q and in Q(i). Method: characteristic polynomial det(λI - A) (Berkowitz), its square-free
-/// part, denominators cleared to integer (Gaussian-integer) coefficients, candidates p/q from the rational root
-/// theorem within Cauchy's root bound, exact verification, deflation; then multiplicities by repeated division and
-/// eigenspaces as null spaces of A - λI.
+/// part, denominators cleared to integer (Gaussian-integer) coefficients, the roots in the field found exactly, then
+/// multiplicities by repeated division and eigenspaces as null spaces of A - λI.
 /// </summary>
 /// <remarks>
-/// Limits: the constant and leading coefficients (for Q(i): their norms) are factored by trial division up to
-/// 1,000,000 and a deterministic Miller-Rabin test on the cofactor below 3.3e24; at most 2,000,000 divisor pairs are
-/// enumerated. Beyond that a <see cref="BeyondCapabilityException"/> names the limit.
+/// Two root finders, both verified exactly:
+/// <list type="bullet">
+/// <item><b>By lifting</b> (used by the eigenvalue methods): with f = a_d x^d + ... + a_0 the root y = a_d x of the monic
+/// integer polynomial a_d^(d-1) f(y / a_d) lies in Z (Z[i]); its roots are found modulo the first prime p = 3 (mod 4)
+/// below 400 for which they are distinct, lifted p-adically beyond Cauchy's root bound and checked. No factoring is
+/// needed, so large coefficients are fine; a <see cref="BeyondCapabilityException"/> is thrown only if no such prime below 400 exists.</item>
+/// <item><b>By divisors</b> (the rational root theorem, kept as the reference): candidates p/q with p dividing the constant
+/// and q the leading coefficient (Gaussian divisors through the norm for Q(i)), within Cauchy's bound, then deflation.
+/// The two coefficients (their norms for Q(i)) are factored by trial division up to 1,000,000 plus a deterministic
+/// Miller-Rabin test (below 3.3e24) on a prime or prime-power cofactor; at most 2,000,000 divisor pairs are enumerated.
+/// Beyond that a <see cref="BeyondCapabilityException"/> names the limit.</item>
+/// </list>
 /// </remarks>
 public static class Eigenvalues
 {
@@ -20,12 +28,12 @@ public static class Eigenvalues
     /// stay in <see cref="EigenDecomposition{T}.RemainingFactor"/>.
     /// </summary>
     /// <exception cref="ExactArgumentException">The matrix is not square.</exception>
-    /// <exception cref="BeyondCapabilityException">The integers met are too large to factor within the documented limits.</exception>
+    /// <exception cref="BeyondCapabilityException">No suitable prime below 400 exists for the lifting root finder (see remarks).</exception>
     public static EigenDecomposition<Rational> OverRationals(Matrix<Rational> matrix)
     {
         ArgumentNullException.ThrowIfNull(matrix);
         matrix.RequireSquare("find the eigenvalues of");
-        return Decompose(matrix, FieldRoots.RationalRoots);
+        return Decompose(matrix, FieldRoots.RationalRootsByLifting);
     }
 
     /// <summary>
@@ -33,12 +41,12 @@ public static class Eigenvalues
     /// imaginary part. Eigenvalues outside Q(i) stay in <see cref="EigenDecomposition{T}.RemainingFactor"/>.
     /// </summary>
     /// <exception cref="ExactArgumentException">The matrix is not square.</exception>
-    /// <exception cref="BeyondCapabilityException">The integers met are too large to factor within the documented limits.</exception>
+    /// <exception cref="BeyondCapabilityException">No suitable prime below 400 exists for the lifting root finder (see remarks).</exception>
     public static EigenDecomposition<GaussianRational> OverGaussianRationals(Matrix<GaussianRational> matrix)
     {
         ArgumentNullException.ThrowIfNull(matrix);
         matrix.RequireSquare("find the eigenvalues of");
-        return Decompose(matrix, FieldRoots.GaussianRationalRoots);
+        return Decompose(matrix, FieldRoots.GaussianRationalRootsByLifting);
     }
 
     /// <summary>
@@ -46,27 +54,45 @@ public static class Eigenvalues
     /// Same ordering as <see cref="OverGaussianRationals(Matrix{GaussianRational})"/>.
     /// </summary>
     /// <exception cref="ExactArgumentException">The matrix is not square.</exception>
-    /// <exception cref="BeyondCapabilityException">The integers met are too large to factor within the documented limits.</exception>
+    /// <exception cref="BeyondCapabilityException">No suitable prime below 400 exists for the lifting root finder (see remarks).</exception>
     public static EigenDecomposition<GaussianRational> OverGaussianRationals(Matrix<Rational> matrix)
     {
         ArgumentNullException.ThrowIfNull(matrix);
         return OverGaussianRationals(matrix.Map(r => (GaussianRational)r));
     }
 
-    /// <summary>The distinct rational roots of a non-zero polynomial, in increasing order (same method and limits).</summary>
+    /// <summary>The distinct rational roots of a non-zero polynomial, in increasing order, by p-adic lifting (see remarks).</summary>
     /// <exception cref="ExactArgumentException">The polynomial is zero.</exception>
     public static IReadOnlyList<Rational> RationalRoots(UnivariatePolynomial<Rational> polynomial)
     {
         CheckNonZero(polynomial);
-        return FieldRoots.RationalRoots(polynomial);
+        return FieldRoots.RationalRootsByLifting(polynomial);
     }
 
-    /// <summary>The distinct Gaussian-rational roots of a non-zero polynomial, by real then imaginary part.</summary>
+    /// <summary>The distinct rational roots of a non-zero polynomial, in increasing order, by the divisor method (see remarks).</summary>
+    /// <exception cref="ExactArgumentException">The polynomial is zero.</exception>
+    /// <exception cref="BeyondCapabilityException">The coefficients are too large to factor within the documented limits.</exception>
+    public static IReadOnlyList<Rational> RationalRootsByDivisors(UnivariatePolynomial<Rational> polynomial)
+    {
+        CheckNonZero(polynomial);
+        return FieldRoots.RationalRootsByDivisors(polynomial);
+    }
+
+    /// <summary>The distinct Gaussian-rational roots of a non-zero polynomial, by real then imaginary part, by p-adic lifting.</summary>
     /// <exception cref="ExactArgumentException">The polynomial is zero.</exception>
     public static IReadOnlyList<GaussianRational> GaussianRationalRoots(UnivariatePolynomial<GaussianRational> polynomial)
     {
         CheckNonZero(polynomial);
-        return FieldRoots.GaussianRationalRoots(polynomial);
+        return FieldRoots.GaussianRationalRootsByLifting(polynomial);
+    }
+
+    /// <summary>The distinct Gaussian-rational roots of a non-zero polynomial, by real then imaginary part, by the divisor method.</summary>
+    /// <exception cref="ExactArgumentException">The polynomial is zero.</exception>
+    /// <exception cref="BeyondCapabilityException">The coefficients are too large to factor within the documented limits.</exception>
+    public static IReadOnlyList<GaussianRational> GaussianRationalRootsByDivisors(UnivariatePolynomial<GaussianRational> polynomial)
+    {
+        CheckNonZero(polynomial);
+        return FieldRoots.GaussianRationalRootsByDivisors(polynomial);
     }
 
     private static void CheckNonZero<T>(UnivariatePolynomial<T> polynomial)

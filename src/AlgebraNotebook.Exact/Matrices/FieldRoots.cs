@@ -4,22 +4,24 @@ using AlgebraNotebook.Exact.Scalars;
 namespace AlgebraNotebook.Exact.Matrices;
 
 /// <summary>
-/// Roots of univariate polynomials inside Q and Q(i) by the rational root theorem: clear denominators, enumerate
-/// quotients of divisors of the constant and leading coefficients within a root bound, verify exactly, deflate.
+/// Roots of univariate polynomials inside Q and Q(i). Two variants: by divisors (the rational root theorem: clear
+/// denominators, enumerate quotients of divisors of the constant and leading coefficients within a root bound, verify
+/// exactly, deflate; needs the two coefficients factored) and by lifting (roots modulo a prime lifted p-adically; no
+/// factoring, see FieldRoots.Lifting.cs).
 /// </summary>
-internal static class FieldRoots
+internal static partial class FieldRoots
 {
     /// <summary>The largest number of (numerator, denominator) divisor pairs the search will enumerate.</summary>
     public const long MaximumCandidatePairs = 2_000_000;
 
-    /// <summary>The distinct rational roots of a non-zero polynomial, in increasing order.</summary>
-    public static List<Rational> RationalRoots(UnivariatePolynomial<Rational> polynomial)
+    /// <summary>The distinct rational roots of a non-zero polynomial, in increasing order, by the divisor method.</summary>
+    public static List<Rational> RationalRootsByDivisors(UnivariatePolynomial<Rational> polynomial)
     {
         return FindRoots(polynomial, RationalCandidates, (a, b) => a.CompareTo(b));
     }
 
-    /// <summary>The distinct Gaussian-rational roots of a non-zero polynomial, ordered by real part, then imaginary part.</summary>
-    public static List<GaussianRational> GaussianRationalRoots(UnivariatePolynomial<GaussianRational> polynomial)
+    /// <summary>The distinct Gaussian-rational roots of a non-zero polynomial (real part, then imaginary part), by the divisor method.</summary>
+    public static List<GaussianRational> GaussianRationalRootsByDivisors(UnivariatePolynomial<GaussianRational> polynomial)
     {
         return FindRoots(polynomial, GaussianCandidates, CompareGaussian);
     }

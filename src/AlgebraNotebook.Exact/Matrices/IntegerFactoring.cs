@@ -110,9 +110,14 @@ internal static class IntegerFactoring
             $"{purpose}: cannot factor {original}: after trial division up to {TrialDivisionBound} the cofactor {n} is composite with every prime factor above {TrialDivisionBound}, and not a prime power.");
     }
 
-    /// <summary>The integer k-th root floor(n^(1/k)) of a positive n, by Newton's method.</summary>
+    /// <summary>The integer k-th root floor(n^(1/k)) of a non-negative n, by Newton's method.</summary>
     public static BigInteger IntegerRoot(BigInteger n, int k)
     {
+        if (n <= BigInteger.One)
+        {
+            return n;
+        }
+
         var x = BigInteger.One << (int)((n.GetBitLength() + k - 1) / k);
         while (true)
         {

@@ -79,6 +79,7 @@ public static class Matrix
     /// with its position moved into the whole text. "[]" is the 0x0 matrix. Spaces and line breaks are ignored between tokens.
     /// </summary>
     /// <exception cref="ExactParseException">The text is malformed or the rows have different lengths; the message points at the offending character.</exception>
+    /// <exception cref="DivideByZeroException">An entry has a zero denominator; the message names the entry and its position.</exception>
     public static Matrix<T> Parse<T>(string text, Func<string, T> parseEntry)
         where T : IRingElement<T>
     {
@@ -186,6 +187,11 @@ public static class Matrix
             catch (ExactParseException inner) when (inner.Input == entryText)
             {
                 throw new ExactParseException(text, start + inner.Position, inner.Problem);
+            }
+            catch (DivideByZeroException inner)
+            {
+                throw new DivideByZeroException(
+                    $"Cannot read the matrix entry \"{entryText.Trim()}\" at position {start + 1} of \"{text}\": {inner.Message}", inner);
             }
 
             if (text[position] == ',')

@@ -5,7 +5,7 @@ namespace AlgebraNotebook.Exact.Polynomials;
 
 /// <summary>
 /// A power product x1^e1 ... xk^ek of symbols with positive exponents; immutable and canonical
-/// (factors sorted by <see cref="Symbol.Id"/>, no zero exponents). The empty product is <see cref="One"/>.
+/// (factors sorted by <see cref="Symbol.Compare"/>, i.e. by name, no zero exponents). The empty product is <see cref="One"/>.
 /// </summary>
 public sealed class Monomial : IEquatable<Monomial>
 {
@@ -41,7 +41,7 @@ public sealed class Monomial : IEquatable<Monomial>
     /// <summary>Number of distinct symbols with a positive exponent.</summary>
     public int FactorCount => _symbols.Length;
 
-    /// <summary>The factors (symbol, exponent) in increasing <see cref="Symbol.Id"/>.</summary>
+    /// <summary>The factors (symbol, exponent) in the canonical symbol order (by name, see <see cref="Symbol.Compare"/>).</summary>
     public IEnumerable<(Symbol Symbol, int Exponent)> Factors
     {
         get
@@ -77,7 +77,7 @@ public sealed class Monomial : IEquatable<Monomial>
     public static Monomial FromFactors(IEnumerable<(Symbol Symbol, int Exponent)> factors)
     {
         ArgumentNullException.ThrowIfNull(factors);
-        var collected = new SortedDictionary<int, (Symbol Symbol, int Exponent)>();
+        var collected = new SortedDictionary<Symbol, (Symbol Symbol, int Exponent)>();
         foreach (var (symbol, exponent) in factors)
         {
             if (exponent < 0)
@@ -85,7 +85,7 @@ public sealed class Monomial : IEquatable<Monomial>
                 throw new ExactArgumentException($"Exponent {exponent} of {symbol} is negative; monomials have non-negative exponents.", nameof(factors));
             }
 
-            collected[symbol.Id] = collected.TryGetValue(symbol.Id, out var old) ? (symbol, old.Exponent + exponent) : (symbol, exponent);
+            collected[symbol] = collected.TryGetValue(symbol, out var old) ? (symbol, old.Exponent + exponent) : (symbol, exponent);
         }
 
         var kept = collected.Values.Where(f => f.Exponent != 0).ToArray();
@@ -102,7 +102,7 @@ public sealed class Monomial : IEquatable<Monomial>
                 return _exponents[k];
             }
 
-            if (_symbols[k].Id > symbol.Id)
+            if (Symbol.Compare(_symbols[k], symbol) > 0)
             {
                 break;
             }
@@ -133,7 +133,7 @@ public sealed class Monomial : IEquatable<Monomial>
         int i = 0, j = 0;
         while (i < _symbols.Length)
         {
-            while (j < other._symbols.Length && other._symbols[j].Id < _symbols[i].Id)
+            while (j < other._symbols.Length && Symbol.Compare(other._symbols[j], _symbols[i]) < 0)
             {
                 j++;
             }
@@ -177,7 +177,7 @@ public sealed class Monomial : IEquatable<Monomial>
         int i = 0, j = 0;
         while (i < left._symbols.Length && j < right._symbols.Length)
         {
-            var c = left._symbols[i].Id.CompareTo(right._symbols[j].Id);
+            var c = Symbol.Compare(left._symbols[i], right._symbols[j]);
             if (c == 0)
             {
                 return false;
@@ -244,12 +244,12 @@ public sealed class Monomial : IEquatable<Monomial>
         {
             Symbol symbol;
             int a = 0, b = 0;
-            if (j == rs.Length || (i < ls.Length && ls[i].Id < rs[j].Id))
+            if (j == rs.Length || (i < ls.Length && Symbol.Compare(ls[i], rs[j]) < 0))
             {
                 symbol = ls[i];
                 a = le[i++];
             }
-            else if (i == ls.Length || rs[j].Id < ls[i].Id)
+            else if (i == ls.Length || Symbol.Compare(rs[j], ls[i]) < 0)
             {
                 symbol = rs[j];
                 b = re[j++];

@@ -17,14 +17,16 @@ public enum MonomialOrderKind
 
 /// <summary>
 /// A monomial order: a kind plus a ranking of symbols. Symbols listed in the ranking come first, in the given order;
-/// any other symbol ranks below them, by <see cref="Symbol.Id"/> (first use). Compare returns a positive number when the
+/// any other symbol ranks below them, in the canonical symbol order (by name, <see cref="Symbol.Compare"/>), so the
+/// default order never depends on which symbol was used first. Compare returns a positive number when the
 /// first monomial is larger.
 /// </summary>
 public sealed class MonomialOrder : IComparer<Monomial>
 {
     private readonly Dictionary<Symbol, int> _rank;
 
-    // Rank key by Symbol.Id for the ranked case; empty when there is no ranking (rank then follows Id).
+    // Rank key by Symbol.Id for the ranked case (-1 for unranked symbols); empty when there is no ranking (rank then
+    // follows the canonical symbol order, which is also the storage order of factors).
     private readonly int[] _keyById;
 
     private IComparer<Monomial>? _descending;
@@ -48,10 +50,7 @@ public sealed class MonomialOrder : IComparer<Monomial>
         {
             var maxId = Ranking.Max(r => r.Id);
             _keyById = new int[maxId + 1];
-            for (var id = 0; id <= maxId; id++)
-            {
-                _keyById[id] = Ranking.Count + id;
-            }
+            Array.Fill(_keyById, -1);
 
             for (var k = 0; k < Ranking.Count; k++)
             {
@@ -63,7 +62,7 @@ public sealed class MonomialOrder : IComparer<Monomial>
     /// <summary>Sorts monomials from largest to smallest under this order.</summary>
     internal IComparer<Monomial> Descending => _descending ??= Comparer<Monomial>.Create((a, b) => CompareCore(b, a));
 
-    /// <summary>The default order used for display and canonical term order: graded reverse lexicographic by first use.</summary>
+    /// <summary>The default order used for display and canonical term order: graded reverse lexicographic, symbols ranked by name.</summary>
     public static MonomialOrder Default { get; } = new(MonomialOrderKind.GradedReverseLexicographic);
 
     /// <summary>The kind of order.</summary>
@@ -87,7 +86,7 @@ public sealed class MonomialOrder : IComparer<Monomial>
             return rb.CompareTo(ra);
         }
 
-        return b.Id.CompareTo(a.Id);
+        return Symbol.Compare(b, a);
     }
 
     /// <inheritdoc />
@@ -112,12 +111,12 @@ public sealed class MonomialOrder : IComparer<Monomial>
             return x.TotalDegree < y.TotalDegree ? -1 : 1;
         }
 
-        return _keyById.Length == 0 ? CompareByFirstUse(x, y) : CompareRanked(x, y);
+        return _keyById.Length == 0 ? CompareByCanonicalRank(x, y) : CompareRanked(x, y);
     }
 
-    // Without a ranking, rank follows Id, which is also the storage order of factors: walk from the front (lex)
+    // Without a ranking, rank follows the canonical symbol order, which is also the storage order of factors: walk from the front (lex)
     // or from the back (grevlex) and stop at the first difference.
-    private int CompareByFirstUse(Monomial x, Monomial y)
+    private int CompareByCanonicalRank(Monomial x, Monomial y)
     {
         var xs = x.SymbolArray;
         var ys = y.SymbolArray;
@@ -141,7 +140,7 @@ public sealed class MonomialOrder : IComparer<Monomial>
                 else
                 {
                     // The lower-ranked symbol occurs in only one of them; that one is smaller.
-                    return xs[i].Id > ys[j].Id ? -1 : 1;
+                    return Symbol.Compare(xs[i], ys[j]) > 0 ? -1 : 1;
                 }
             }
 
@@ -165,7 +164,7 @@ public sealed class MonomialOrder : IComparer<Monomial>
                 else
                 {
                     // The higher-ranked symbol occurs in only one of them; that one is larger.
-                    return xs[i].Id < ys[j].Id ? 1 : -1;
+                    return Symbol.Compare(xs[i], ys[j]) < 0 ? 1 : -1;
                 }
             }
 
@@ -173,7 +172,7 @@ public sealed class MonomialOrder : IComparer<Monomial>
         }
     }
 
-    // With a ranking, merge the factor lists by Id and keep the differing symbol of extreme rank.
+    // With a ranking, merge the factor lists in canonical order and keep the differing symbol of extreme rank.
     private int CompareRanked(Monomial x, Monomial y)
     {
         var xs = x.SymbolArray;
@@ -183,17 +182,18 @@ public sealed class MonomialOrder : IComparer<Monomial>
         var reverse = Kind == MonomialOrderKind.GradedReverseLexicographic;
         var bestKey = reverse ? int.MinValue : int.MaxValue;
         var bestDifference = 0;
+        var position = 0;
         int i = 0, j = 0;
         while (i < xs.Length || j < ys.Length)
         {
             Symbol symbol;
             int difference;
-            if (j == ys.Length || (i < xs.Length && xs[i].Id < ys[j].Id))
+            if (j == ys.Length || (i < xs.Length && Symbol.Compare(xs[i], ys[j]) < 0))
             {
                 symbol = xs[i];
                 difference = xe[i++];
             }
-            else if (i == xs.Length || ys[j].Id < xs[i].Id)
+            else if (i == xs.Length || Symbol.Compare(ys[j], xs[i]) < 0)
             {
                 symbol = ys[j];
                 difference = -ye[j++];
@@ -204,12 +204,13 @@ public sealed class MonomialOrder : IComparer<Monomial>
                 difference = xe[i++] - ye[j++];
             }
 
+            position++;
             if (difference == 0)
             {
                 continue;
             }
 
-            var key = KeyOf(symbol);
+            var key = KeyOf(symbol, position);
             if (reverse ? key > bestKey : key < bestKey)
             {
                 bestKey = key;
@@ -225,11 +226,13 @@ public sealed class MonomialOrder : IComparer<Monomial>
         return reverse ? (bestDifference < 0 ? 1 : -1) : (bestDifference > 0 ? 1 : -1);
     }
 
-    // Smaller key = higher rank. Ranked symbols get their position; the others follow by Id.
-    private int KeyOf(Symbol symbol)
+    // Smaller key = higher rank. Ranked symbols get their position in the ranking; the others follow in canonical
+    // order, which is the order of the merge, so the merge position is a valid key among them.
+    private int KeyOf(Symbol symbol, int mergePosition)
     {
         var id = symbol.Id;
-        return id < _keyById.Length ? _keyById[id] : Ranking.Count + id;
+        var key = id < _keyById.Length ? _keyById[id] : -1;
+        return key >= 0 ? key : Ranking.Count + mergePosition;
     }
 
     /// <inheritdoc />
@@ -241,6 +244,6 @@ public sealed class MonomialOrder : IComparer<Monomial>
             MonomialOrderKind.GradedLexicographic => "graded lexicographic",
             _ => "graded reverse lexicographic",
         };
-        return Ranking.Count == 0 ? $"{kind} (symbols ranked by first use)" : $"{kind} with {string.Join(" > ", Ranking)}";
+        return Ranking.Count == 0 ? $"{kind} (symbols ranked by name)" : $"{kind} with {string.Join(" > ", Ranking)}";
     }
 }

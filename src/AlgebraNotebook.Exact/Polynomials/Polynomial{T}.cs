@@ -8,7 +8,7 @@ namespace AlgebraNotebook.Exact.Polynomials;
 /// A multivariate polynomial with exact coefficients in the field <typeparamref name="T"/> (Rational or
 /// GaussianRational). Immutable and canonical: terms have distinct monomials and non-zero coefficients and are kept
 /// sorted in DESCENDING <see cref="MonomialOrder.Default"/> order (graded reverse lexicographic, symbols ranked by
-/// first use), so equal polynomials have equal term lists.
+/// name), so equal polynomials have equal term lists.
 /// </summary>
 /// <remarks>
 /// Being a class, <c>default(Polynomial&lt;T&gt;)</c> is null; use the shared instance <see cref="Zero"/>.

@@ -12,7 +12,7 @@ namespace AlgebraNotebook.Exact.Polynomials;
 /// representative of its class, so two polynomials are equal in the ring exactly when their normal forms agree.
 /// </summary>
 /// <remarks>
-/// <para>Default order: <see cref="MonomialOrder.Default"/> (graded reverse lexicographic, symbols ranked by first use),
+/// <para>Default order: <see cref="MonomialOrder.Default"/> (graded reverse lexicographic, symbols ranked by name),
 /// usually the cheapest order for Groebner bases. Normal forms then prefer lower total degree.</para>
 /// <para>Inverse declarations (s, t) add the relation s*t - 1. Under any graded order the leading monomial of s*t - 1 is
 /// s*t, so normal forms never contain s and t together: they read as Laurent polynomials (t^3*tinv^2 becomes t). To

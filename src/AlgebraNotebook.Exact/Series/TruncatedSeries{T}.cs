@@ -68,7 +68,7 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
     /// </summary>
     public int Order { get; }
 
-    /// <summary>The small parameters, in increasing <see cref="Symbol.Id"/> (first use).</summary>
+    /// <summary>The small parameters, in the canonical symbol order (by name).</summary>
     public IReadOnlyList<Symbol> Parameters => _parametersView ??= Array.AsReadOnly(_parameters);
 
     /// <summary>True when nothing is unknown (<see cref="Order"/> is <see cref="ExactOrder"/>).</summary>
@@ -380,7 +380,7 @@ public sealed partial class TruncatedSeries<T> : IRationalAlgebraElement<Truncat
             }
         }
 
-        var parameterArray = symbols.Count == 0 ? NoSymbols : symbols.OrderBy(s => s.Id).ToArray();
+        var parameterArray = symbols.Count == 0 ? NoSymbols : symbols.Order().ToArray();
         return new TruncatedSeries<T>(kept.ToArray(), order, parameterArray);
     }
 

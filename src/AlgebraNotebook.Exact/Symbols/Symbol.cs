@@ -4,8 +4,9 @@ namespace AlgebraNotebook.Exact.Symbols;
 
 /// <summary>
 /// A named variable or parameter (x, hbar, theta, t1). Symbols are interned: two symbols with the same name are the
-/// same object, compare equal, and have the same <see cref="Id"/>. Ids follow first use in the process, which is also
-/// the default variable ranking of monomial orders (the first symbol used ranks highest).
+/// same object, compare equal, and have the same <see cref="Id"/>. Symbols are ordered by name (ordinal comparison of
+/// their names), never by when they were first used, so that output does not depend on which cell ran first: this is the
+/// storage order of factors in a monomial and the default variable ranking of monomial orders (a ranks above b).
 /// </summary>
 public sealed class Symbol : IEquatable<Symbol>, IComparable<Symbol>
 {
@@ -88,8 +89,11 @@ public sealed class Symbol : IEquatable<Symbol>, IComparable<Symbol>
     /// <inheritdoc />
     public override int GetHashCode() => Id;
 
-    /// <summary>Orders by <see cref="Id"/> (first use).</summary>
-    public int CompareTo(Symbol? other) => other is null ? 1 : Id.CompareTo(other.Id);
+    /// <summary>Orders by name (ordinal), the canonical symbol order.</summary>
+    public int CompareTo(Symbol? other) => other is null ? 1 : Compare(this, other);
+
+    /// <summary>The canonical symbol order: ordinal comparison of the names; negative when <paramref name="a"/> comes first.</summary>
+    public static int Compare(Symbol a, Symbol b) => ReferenceEquals(a, b) ? 0 : string.CompareOrdinal(a.Name, b.Name);
 
     /// <inheritdoc />
     public override string ToString() => Name;

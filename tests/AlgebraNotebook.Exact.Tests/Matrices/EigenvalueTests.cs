@@ -194,16 +194,73 @@ public class EigenvalueTests
     }
 
     [Fact]
-    public void Coefficients_beyond_the_factoring_bound_are_refused_naming_the_bound()
+    public void Divisor_method_refuses_coefficients_beyond_the_factoring_bound_naming_the_bound()
     {
         // 1000003 and 1000033 are prime (checked by trial division), so their product has no factor below 10^6.
         var product = new BigInteger(1000003) * 1000033;
         var p = UnivariatePolynomial.FromCoefficients<Rational>(product, 1, 1);
-        var error = Assert.Throws<BeyondCapabilityException>(() => Eigenvalues.RationalRoots(p));
+        var error = Assert.Throws<BeyondCapabilityException>(() => Eigenvalues.RationalRootsByDivisors(p));
         Assert.Contains("1000000", error.Message);
         Assert.Contains(product.ToString(), error.Message);
+        // The lifting method needs no factoring: λ^2 + λ + 1000003*1000033 has negative discriminant, so no rational root.
+        Assert.Empty(Eigenvalues.RationalRoots(p));
         var companion = Matrix.FromRows<Rational>([0, -product], [1, -1]);
-        Assert.Throws<BeyondCapabilityException>(() => Eigenvalues.OverRationals(companion));
+        Assert.Equal(2, Eigenvalues.OverRationals(companion).RemainingFactor.Degree);
+        // Planted roots beside the same hard constant are still found.
+        var planted = p * UnivariatePolynomial.FromRoots<Rational>(new Rational(7, 3), -product);
+        Assert.Equal(new[] { (Rational)(-product), new Rational(7, 3) }, Eigenvalues.RationalRoots(planted));
+    }
+
+    [Fact]
+    public void Lifting_and_divisor_root_finders_agree_on_random_polynomials()
+    {
+        // The divisor method is the rational root theorem itself (common practice) and serves as the oracle.
+        var random = new Random(777);
+        for (var iteration = 0; iteration < 30 * Iterations; iteration++)
+        {
+            var rationalRoots = Enumerable.Range(0, random.Next(0, 5)).Select(_ => new Rational(random.Next(-20, 21), random.Next(1, 7))).ToArray();
+            var extra = UnivariatePolynomial<Rational>.FromCoefficients(Enumerable.Range(0, random.Next(1, 4)).Select(_ => (Rational)random.Next(-9, 10)).Append(random.Next(1, 4)));
+            var p = new Rational(random.Next(1, 5)) * UnivariatePolynomial.FromRoots(rationalRoots) * extra;
+            Assert.True(
+                Eigenvalues.RationalRootsByDivisors(p).SequenceEqual(Eigenvalues.RationalRoots(p)),
+                $"rational root finders disagree on {p}: [{string.Join(", ", Eigenvalues.RationalRootsByDivisors(p))}] vs [{string.Join(", ", Eigenvalues.RationalRoots(p))}]");
+            Assert.True(rationalRoots.Distinct().All(r => Eigenvalues.RationalRoots(p).Contains(r)), $"a planted root of {p} is missing");
+
+            var gaussianRoots = Enumerable.Range(0, random.Next(0, 4))
+                .Select(_ => new GaussianRational(new Rational(random.Next(-9, 10), random.Next(1, 4)), new Rational(random.Next(-9, 10), random.Next(1, 4))))
+                .ToArray();
+            var gaussianExtra = UnivariatePolynomial<GaussianRational>.FromCoefficients(
+                Enumerable.Range(0, random.Next(1, 3)).Select(_ => new GaussianRational(random.Next(-5, 6), random.Next(-5, 6))).Append(GaussianRational.One));
+            var q = UnivariatePolynomial.FromRoots(gaussianRoots) * gaussianExtra;
+            Assert.True(
+                Eigenvalues.GaussianRationalRootsByDivisors(q).SequenceEqual(Eigenvalues.GaussianRationalRoots(q)),
+                $"Gaussian root finders disagree on {q}: [{string.Join(", ", Eigenvalues.GaussianRationalRootsByDivisors(q))}] vs [{string.Join(", ", Eigenvalues.GaussianRationalRoots(q))}]");
+            Assert.True(gaussianRoots.Distinct().All(r => Eigenvalues.GaussianRationalRoots(q).Contains(r)), $"a planted root of {q} is missing");
+        }
+    }
+
+    [Fact]
+    public void Planted_eigenvalues_are_found_beside_a_random_block_with_large_coefficients()
+    {
+        // A = P (D ⊕ R) P^-1: D's entries must appear with at least their multiplicities (common practice: similarity
+        // preserves the characteristic polynomial); R (random, 8x8) makes the coefficients too large for trial division.
+        var random = new Random(2026);
+        for (var iteration = 0; iteration < 3 * Iterations; iteration++)
+        {
+            var diagonal = new Rational[] { random.Next(-9, 10), random.Next(-9, 10), new Rational(random.Next(-9, 10), 1) };
+            var block = RandomIntegerMatrix(random, 8, 8, 50);
+            var p = RandomUnimodular(random, 11);
+            var a = p * Matrix.DirectSum(Matrix.Diagonal(diagonal), block) * LinearAlgebra.Inverse(p);
+            var decomposition = Eigenvalues.OverRationals(a);
+            foreach (var group in diagonal.GroupBy(d => d))
+            {
+                var found = decomposition.Eigenvalues.SingleOrDefault(e => e.Value == group.Key);
+                Assert.True(found is not null && found.AlgebraicMultiplicity >= group.Count(), $"planted eigenvalue {group.Key} missing for A = {a}");
+            }
+
+            AssertEigenpairs(decomposition);
+            Assert.Equal(decomposition.CharacteristicPolynomial, LinearAlgebra.CharacteristicPolynomial(Matrix.Diagonal(diagonal)) * LinearAlgebra.CharacteristicPolynomial(block));
+        }
     }
 
     [Fact]

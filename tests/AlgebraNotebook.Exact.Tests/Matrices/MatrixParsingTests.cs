@@ -61,6 +61,7 @@ public class MatrixParsingTests
     [Fact]
     public void A_zero_denominator_in_an_entry_is_a_division_by_zero()
     {
-        Assert.Throws<DivideByZeroException>(() => Matrix.ParseRational("[[1/0]]"));
+        var error = Assert.Throws<DivideByZeroException>(() => Matrix.ParseRational("[[1, 2], [3/0, 4]]"));
+        Assert.Contains("\"3/0\" at position 11", error.Message);
     }
 }

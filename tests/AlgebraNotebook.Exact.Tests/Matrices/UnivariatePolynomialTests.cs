@@ -58,4 +58,29 @@ public class UnivariatePolynomialTests
         var q = P(-4, 0, 1, 1);
         Assert.Equal(p.Derivative() * q + p * q.Derivative(), (p * q).Derivative());
     }
+
+    [Fact]
+    public void Polynomial_ring_axioms_hold_on_random_polynomials()
+    {
+        // Commutative ring axioms (common practice).
+        var random = new Random(11);
+        UnivariatePolynomial<GaussianRational> Next() => UnivariatePolynomial<GaussianRational>.FromCoefficients(
+            Enumerable.Range(0, random.Next(0, 5)).Select(_ => new GaussianRational(new Rational(random.Next(-5, 6), random.Next(1, 4)), random.Next(-3, 4))));
+        for (var iteration = 0; iteration < 40 * MatrixTestSupport.Iterations; iteration++)
+        {
+            var (a, b, c) = (Next(), Next(), Next());
+            var context = $"a = {a}, b = {b}, c = {c}";
+            Assert.True((a + b) + c == a + (b + c), context);
+            Assert.True((a * b) * c == a * (b * c), context);
+            Assert.True(a * b == b * a, context);
+            Assert.True(a * (b + c) == a * b + a * c, context);
+            Assert.True(a - a == UnivariatePolynomial<GaussianRational>.Zero, context);
+            Assert.True(a * UnivariatePolynomial<GaussianRational>.One == a, context);
+            var copy = UnivariatePolynomial<GaussianRational>.FromCoefficients(a.Coefficients.Append(GaussianRational.Zero));
+            Assert.True(copy == a && copy.GetHashCode() == a.GetHashCode(), context);
+            Assert.True((a * b).Degree == (a.IsZero || b.IsZero ? -1 : a.Degree + b.Degree), context);
+            var point = new GaussianRational(random.Next(-3, 4), random.Next(-3, 4));
+            Assert.True((a * b).Evaluate(point) == a.Evaluate(point) * b.Evaluate(point), context);
+        }
+    }
 }
