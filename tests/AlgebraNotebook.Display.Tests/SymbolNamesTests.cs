@@ -35,7 +35,7 @@ public class SymbolNamesTests
     {
         // Greek letters and ℏ: Unicode code charts (Greek and Coptic U+0370-03FF; U+210F PLANCK CONSTANT OVER TWO PI)
         // and the LaTeX symbol list (The Comprehensive LaTeX Symbol List, tables of greek letters); capitals upright as in plain TeX: from memory.
-        // Identifier nodes rather than interned symbols, so these names do not take part in other tests' symbol ranking.
+        // Identifier nodes go through the same naming convention as symbols.
         var symbol = AlgebraNotebook.Display.Tree.MathNodes.Symbol(name);
         Assert.Equal($"<math display=\"block\" xmlns=\"http://www.w3.org/1998/Math/MathML\">{mathmlBody}</math>", MathDisplay.ToMathML(symbol));
         Assert.Equal(latex, MathDisplay.ToLatex(symbol));
