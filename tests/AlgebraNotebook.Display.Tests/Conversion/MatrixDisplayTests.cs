@@ -10,7 +10,7 @@ public class MatrixDisplayTests
     [Fact]
     public void Two_by_two_matrix_with_fractions_matches_approved_outputs()
     {
-        // Matrix as a table inside stretchy parentheses (W3C MathML Core 3.5, mtable; amsmath pmatrix).
+        // Matrix as a table inside stretchy parentheses (W3C MathML Core mtable; amsmath pmatrix; common practice).
         Approvals.VerifyAllFormats("Matrix_two_by_two_fractions", Matrix.ParseRational("[[1/2, -3/4], [0, 5/3]]"));
     }
 

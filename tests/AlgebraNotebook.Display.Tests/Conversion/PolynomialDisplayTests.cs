@@ -1,26 +1,15 @@
 using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
-using AlgebraNotebook.Exact.Symbols;
 
 namespace AlgebraNotebook.Display.Tests.Conversion;
 
 public class PolynomialDisplayTests
 {
-    static PolynomialDisplayTests()
-    {
-        // Term order follows symbol first use (MonomialOrder.Default); these names are used by no other test, and
-        // interning them here in a fixed order keeps the approved term order stable.
-        foreach (var name in new[] { "beta", "hbar", "J_z", "q2" })
-        {
-            Symbol.Of(name);
-        }
-    }
-
     [Fact]
     public void Polynomial_with_greek_hbar_and_subscript_names_matches_approved_outputs()
     {
         // Greek letters, ℏ and subscripts by the SymbolNames convention; a coefficient a + b i parenthesised in a product
-        // (common practice).
+        // (common practice). Factor and term order are the polynomial's own (symbols ordered by name: J_z before beta).
         var polynomial = Polynomial<GaussianRational>.Parse("(1/2 - 3/5 i)*beta^2*J_z - 2*hbar*q2 + i*hbar^2 - 5/2");
         Approvals.VerifyAllFormats("Polynomial_greek_hbar_subscripts", polynomial);
     }

@@ -1,3 +1,4 @@
+using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Series;
 
@@ -42,5 +43,21 @@ public class SeriesDisplayTests
         var latex = MathDisplay.ToLatex(s + u);
         Assert.Equal("s + u + O((s, u)^{3})", latex);
         Assert.Equal("s + u + O((s, u)^3)", MathDisplay.ToPlainText(s + u));
+    }
+
+    [Fact]
+    public void Series_with_polynomial_coefficients_renders_coefficients_recursively()
+    {
+        // e^(kappa tau) = sum kappa^n tau^n / n!: Abramowitz and Stegun, Handbook of Mathematical Functions, 4.2.1.
+        var kappa = Polynomial<Rational>.Variable("kappa");
+        var tau = TruncatedSeries<Polynomial<Rational>>.Parameter("tau", 4);
+        var series = (kappa * tau).Exp();
+        Assert.True(MathDisplay.CanRender(series));
+        Assert.Equal(@"1 + \kappa \tau + \frac{1}{2} \kappa^{2} \tau^{2} + \frac{1}{6} \kappa^{3} \tau^{3} + O(\tau^{4})", MathDisplay.ToLatex(series));
+        Assert.Equal("1 + kappa*tau + 1/2*kappa^2*tau^2 + 1/6*kappa^3*tau^3 + O(tau^4)", MathDisplay.ToPlainText(series));
+
+        // A coefficient with several terms is parenthesised (common practice).
+        var sum = (kappa + Polynomial<Rational>.One) * TruncatedSeries<Polynomial<Rational>>.Parameter("tau", 3);
+        Assert.Equal("(kappa + 1)*tau + O(tau^3)", MathDisplay.ToPlainText(sum));
     }
 }
