@@ -15,7 +15,12 @@ namespace AlgebraNotebook.Display;
 /// generic types <see cref="AlgebraNotebook.Exact.Polynomials.Polynomial{T}"/>, <see cref="AlgebraNotebook.Exact.Polynomials.QuotientElement{T}"/>
 /// (shown as its normal form), <see cref="AlgebraNotebook.Exact.Matrices.Matrix{T}"/>, <see cref="AlgebraNotebook.Exact.Matrices.UnivariatePolynomial{T}"/>
 /// (in its variable λ) and <see cref="AlgebraNotebook.Exact.Series.TruncatedSeries{T}"/> (terms by ascending total degree, then O(t^N)),
-/// whenever their type arguments are renderable. Entries and coefficients are converted recursively through the same
+/// whenever their type arguments are renderable. The results of exact computations are renderable too (converters in
+/// the Exact folder): <see cref="AlgebraNotebook.Exact.Matrices.EigenDecomposition{T}"/> (a table of eigenvalues,
+/// multiplicities and eigenspace bases, then the characteristic polynomial and completeness in words),
+/// <see cref="AlgebraNotebook.Exact.Matrices.Eigenvalue{T}"/>, <see cref="AlgebraNotebook.Exact.Matrices.SolutionSet{T}"/>
+/// (particular solution plus the span of the null space), <see cref="AlgebraNotebook.Exact.Polynomials.QuotientRing{T}"/>
+/// (relations, reduced Groebner basis, monomial order) and <see cref="AlgebraNotebook.Exact.Polynomials.GroebnerStatistics"/>. Entries and coefficients are converted recursively through the same
 /// registry, so Matrix&lt;Polynomial&lt;GaussianRational&gt;&gt; works with no extra code.</para>
 /// <para>Conventions: numbers are exact (integers and built-up fractions, sign in front); the imaginary unit is an
 /// upright i (ISO 80000-2), LaTeX <c>\mathrm{i}</c>; symbol names are typeset by <see cref="SymbolNames"/>; plain
