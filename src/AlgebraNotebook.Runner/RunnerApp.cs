@@ -56,7 +56,8 @@ public static partial class RunnerApp
                   outputs stored in the file: text/plain of results and displays, console text,
                   and errors (name and message), ignoring trailing whitespace and line endings.
                   A cell whose metadata holds {"algebranotebook": {"volatile": true}} is not
-                  compared. Differences are printed as a per-cell diff on standard output.
+                  compared, nor is a cell without a stored run (no execution count, no outputs).
+                  Differences are printed as a per-cell diff on standard output.
                   Takes --cell-timeout and --quiet like run.
 
         export    Writes a document from the outputs stored in an .ipynb file, without executing

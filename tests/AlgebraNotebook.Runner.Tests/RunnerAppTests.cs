@@ -200,6 +200,22 @@ public class RunnerAppTests
     }
 
     [Fact]
+    public async Task In_place_saves_the_outputs_into_the_input_notebook_keeping_its_ids()
+    {
+        using var temp = new TempNotebook();
+        var path = temp.WriteIpynb("inplace.ipynb", ("code", "Rational.Parse(\"1/3\") + Rational.Parse(\"1/6\")", "csharp"));
+        var (code, stdout, stderr) = await Run("run", path, "--in-place", "--quiet");
+        Assert.True(code == 0, $"exit {code}; stderr: {stderr}");
+        Assert.Equal(string.Empty, stderr);
+        Assert.EndsWith(path, stdout.Trim());
+        var stored = StoredNotebook.Load(path);
+        Assert.Equal("cell-1", stored.Cells[0].Id);
+        // 1/3 + 1/6 = 1/2 (common practice).
+        Assert.Equal("1/2", stored.Cells[0].Outputs.Single().Data["text/plain"]);
+        Assert.Empty(Directory.GetFiles(temp.Folder, "*.tmp-*"));
+    }
+
+    [Fact]
     public async Task Check_of_a_notebook_without_stored_outputs_exits_2_and_says_to_run_it_first()
     {
         using var temp = new TempNotebook();
