@@ -89,7 +89,7 @@ public sealed partial class RootSystem
 
     /// <summary>
     /// The marks (labels) a_1..a_n of a simple system: the simple-root coordinates of the highest root,
-    /// theta = sum_i a_i alpha_i. The affine node has mark a_0 = 1 (see the extended diagram).
+    /// theta = sum_i a_i alpha_i. The affine node has mark a_0 = 1 (see <see cref="ExtendedDiagram"/>).
     /// </summary>
     /// <exception cref="AlgebraNotebook.Exact.ExactArgumentException">The system is not simple.</exception>
     public IReadOnlyList<int> Marks => HighestRoot.SimpleRootCoordinates;
