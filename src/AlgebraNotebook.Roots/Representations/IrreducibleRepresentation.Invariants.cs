@@ -43,6 +43,12 @@ public sealed partial class IrreducibleRepresentation
         }
     }
 
+    /// <summary>
+    /// The congruence class of the highest weight in P/Q (weight lattice modulo root lattice), as computed by
+    /// <see cref="RootSystem.CongruenceClass(Weight)"/>; every weight of V(lambda) lies in this class.
+    /// </summary>
+    public CongruenceClass CongruenceClass => System.CongruenceClass(HighestWeight);
+
     /// <summary>The pairing &lt;lambda, 2 rho^vee&gt; (sum over positive roots of &lt;lambda, beta^vee&gt;) used by <see cref="Reality"/>.</summary>
     public long HeightPairingWithTwiceRhoCheck => Geometry.HeightPairing(_labels);
 

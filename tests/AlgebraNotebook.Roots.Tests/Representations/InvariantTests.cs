@@ -1,0 +1,169 @@
+using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.Roots.Representations;
+using static AlgebraNotebook.Roots.Tests.Representations.RepresentationTestData;
+
+namespace AlgebraNotebook.Roots.Tests.Representations;
+
+public class CasimirAndIndexTests
+{
+    // REFERENCES.md: physics normalisation, su(N) fundamental (N^2 - 1)/(2N), adjoint = dual Coxeter number N.
+    [Fact]
+    public void Su_N_fundamental_and_adjoint_Casimirs_in_physics_normalisation()
+    {
+        for (var n = 2; n <= 9; n++)
+        {
+            var rank = n - 1;
+            var fundamental = new int[rank];
+            fundamental[0] = 1;
+            var adjoint = new int[rank];
+            adjoint[0] = 1;
+            adjoint[rank - 1] += 1;
+            Assert.Equal(new Rational(n * n - 1, 2 * n), Irrep("A" + rank, fundamental).QuadraticCasimir());
+            Assert.Equal(new Rational(n), Irrep("A" + rank, adjoint).QuadraticCasimir());
+        }
+    }
+
+    // Adjoint Casimir = dual Coxeter number: A_n n+1, B_n 2n-1, C_n n+1, D_n 2n-2, E6 12, E7 18, E8 30, F4 9, G2 4
+    // (common practice; Kac, Infinite dimensional Lie algebras, Ch. 6 tables, from memory); Killing normalisation gives 1.
+    [Theory]
+    [InlineData("A4", 5)]
+    [InlineData("B4", 7)]
+    [InlineData("C4", 5)]
+    [InlineData("D5", 8)]
+    [InlineData("E6", 12)]
+    [InlineData("E7", 18)]
+    [InlineData("E8", 30)]
+    [InlineData("F4", 9)]
+    [InlineData("G2", 4)]
+    public void Adjoint_Casimir_is_the_dual_Coxeter_number_and_1_for_the_Killing_form(string type, int dualCoxeter)
+    {
+        var system = RootSystem.Of(type);
+        var adjoint = IrreducibleRepresentation.Of(system, system.HighestRoot.AsWeight);
+        Assert.Equal(new Rational(dualCoxeter), adjoint.QuadraticCasimir(CasimirNormalisation.Physics));
+        Assert.Equal(new Rational(system.DualCoxeterNumber), adjoint.QuadraticCasimir(CasimirNormalisation.Physics));
+        Assert.Equal(Rational.One, adjoint.QuadraticCasimir(CasimirNormalisation.Killing));
+    }
+
+    // Index of su(N): fundamental 1/2 and adjoint N in the physics convention (common practice); in Dynkin's convention,
+    // as tabulated by Slansky 1981 (Table of su(N) irreps, index l), fundamental 1 and adjoint 2N.
+    [Fact]
+    public void Su_N_indices_in_both_conventions()
+    {
+        for (var n = 2; n <= 8; n++)
+        {
+            var rank = n - 1;
+            var fundamental = new int[rank];
+            fundamental[0] = 1;
+            var adjoint = new int[rank];
+            adjoint[0] = 1;
+            adjoint[rank - 1] += 1;
+            Assert.Equal(Rational.Half, Irrep("A" + rank, fundamental).DynkinIndex());
+            Assert.Equal(new Rational(n), Irrep("A" + rank, adjoint).DynkinIndex());
+            Assert.Equal(Rational.One, Irrep("A" + rank, fundamental).DynkinIndex(IndexConvention.Dynkin));
+            Assert.Equal(new Rational(2 * n), Irrep("A" + rank, adjoint).DynkinIndex(IndexConvention.Dynkin));
+        }
+    }
+
+    // Slansky 1981 index tables (Dynkin convention, su(N) fundamental = 1), values from memory:
+    // su(3) 6: 5, 10: 15, 27: 54; E6 27: 6, 78: 24; E8 248: 60; G2 7: 2, 14: 8, 27: 18; so(10) 10: 2, 16: 4.
+    [Theory]
+    [InlineData("A2", new[] { 2, 0 }, 5)]
+    [InlineData("A2", new[] { 3, 0 }, 15)]
+    [InlineData("A2", new[] { 2, 2 }, 54)]
+    [InlineData("E6", new[] { 1, 0, 0, 0, 0, 0 }, 6)]
+    [InlineData("E6", new[] { 0, 1, 0, 0, 0, 0 }, 24)]
+    [InlineData("E8", new[] { 0, 0, 0, 0, 0, 0, 0, 1 }, 60)]
+    [InlineData("G2", new[] { 1, 0 }, 2)]
+    [InlineData("G2", new[] { 0, 1 }, 8)]
+    [InlineData("G2", new[] { 2, 0 }, 18)]
+    [InlineData("D5", new[] { 1, 0, 0, 0, 0 }, 2)]
+    [InlineData("D5", new[] { 0, 0, 0, 1, 0 }, 4)]
+    public void Dynkin_indices_match_Slansky_tables(string type, int[] labels, int expected)
+    {
+        Assert.Equal(new Rational(expected), Irrep(type, labels).DynkinIndex(IndexConvention.Dynkin));
+    }
+
+    // Property: the index of a tensor product is dim(W) l(V) + dim(V) l(W) (common practice).
+    [Fact]
+    public void Index_of_a_product_is_additive_with_dimension_weights()
+    {
+        var a = Irrep("B3", 1, 0, 1);
+        var b = Irrep("B3", 0, 0, 1);
+        var product = TensorProduct.Decompose(a, b);
+        var sum = product.Terms.Aggregate(Rational.Zero, (s, t) => s + t.Irreducible.DynkinIndex() * t.Multiplicity);
+        Assert.Equal(a.DynkinIndex() * b.Dimension + b.DynkinIndex() * a.Dimension, sum);
+    }
+
+    [Fact]
+    public void Semisimple_index_is_per_component_and_whole_algebra_index_is_refused()
+    {
+        var rep = Irrep("A2+A1", 1, 0, 1);
+        Assert.Throws<ExactArgumentException>(() => rep.DynkinIndex());
+        // (3, 2) restricted to su(3) is two triplets: index 2 * 1/2 = 1; to su(2) three doublets: 3/2.
+        Assert.Equal(Rational.One, rep.DynkinIndexOfComponent(0));
+        Assert.Equal(new Rational(3, 2), rep.DynkinIndexOfComponent(1));
+        Assert.Equal(new Rational(4, 3) + new Rational(3, 4), rep.QuadraticCasimir());
+    }
+}
+
+public class RealityAndDualTests
+{
+    // Common practice: su(2) spin 1/2 pseudo-real, so(3) vector (su(2) spin 1) real, su(3) 3 complex, E7 56 pseudo-real,
+    // E8 248 real, E6 27 complex, so(10) 16 complex, sp(4) 4 pseudo-real, so(8) spinors real, su(2)+su(2) (2, 2) real.
+    [Theory]
+    [InlineData("A1", new[] { 1 }, Reality.PseudoReal)]
+    [InlineData("A1", new[] { 2 }, Reality.Real)]
+    [InlineData("A2", new[] { 1, 0 }, Reality.Complex)]
+    [InlineData("A2", new[] { 1, 1 }, Reality.Real)]
+    [InlineData("E7", new[] { 0, 0, 0, 0, 0, 0, 1 }, Reality.PseudoReal)]
+    [InlineData("E8", new[] { 0, 0, 0, 0, 0, 0, 0, 1 }, Reality.Real)]
+    [InlineData("E6", new[] { 1, 0, 0, 0, 0, 0 }, Reality.Complex)]
+    [InlineData("D5", new[] { 0, 0, 0, 1, 0 }, Reality.Complex)]
+    [InlineData("C2", new[] { 1, 0 }, Reality.PseudoReal)]
+    [InlineData("D4", new[] { 0, 0, 0, 1 }, Reality.Real)]
+    [InlineData("D6", new[] { 0, 0, 0, 0, 0, 1 }, Reality.PseudoReal)]
+    [InlineData("A1+A1", new[] { 1, 1 }, Reality.Real)]
+    [InlineData("A1+A1", new[] { 1, 0 }, Reality.PseudoReal)]
+    [InlineData("G2", new[] { 1, 0 }, Reality.Real)]
+    public void Reality_matches_common_practice(string type, int[] labels, Reality expected)
+    {
+        Assert.Equal(expected, Irrep(type, labels).Reality);
+    }
+
+    // Property: the dual of the dual is the representation itself; dimension, Casimir and index are preserved.
+    [Fact]
+    public void Dual_of_dual_is_self_and_keeps_invariants()
+    {
+        var random = new Random(77);
+        string[] types = ["A4", "D5", "E6", "B3", "A2+A3"];
+        for (var iteration = 0; iteration < 20 * Iterations; iteration++)
+        {
+            var system = RootSystem.Of(types[random.Next(types.Length)]);
+            var labels = Enumerable.Range(0, system.Rank).Select(_ => random.Next(3)).ToArray();
+            var v = IrreducibleRepresentation.Of(system, labels);
+            Assert.True(v.Equals(v.Dual.Dual), $"{system.Type} {v.HighestWeight}");
+            Assert.Equal(v.Dimension, v.Dual.Dimension);
+            Assert.Equal(v.QuadraticCasimir(), v.Dual.QuadraticCasimir());
+        }
+    }
+
+    // su(N): the dual of (a1, ..., a_{N-1}) reverses the labels (common practice); E6 dual swaps nodes 1<->6 and 3<->5.
+    [Fact]
+    public void Duals_reverse_su_N_labels_and_apply_the_E6_diagram_symmetry()
+    {
+        Assert.Equal([0, 2, 1], Irrep("A3", 1, 2, 0).Dual.DynkinLabels);
+        Assert.Equal([0, 0, 1, 0, 0, 1], Irrep("E6", 1, 0, 0, 0, 1, 0).Dual.DynkinLabels);
+    }
+
+    // Every weight of V(lambda) is congruent to lambda modulo the root lattice (common practice); the adjoint is in the root class.
+    [Fact]
+    public void Congruence_class_is_shared_by_all_weights()
+    {
+        var v = Irrep("E6", 1, 0, 0, 0, 0, 0);
+        var system = v.System;
+        Assert.All(v.AllWeights(), w => Assert.Equal(v.CongruenceClass, system.CongruenceClass(w.Weight)));
+        Assert.True(Irrep("E6", 0, 1, 0, 0, 0, 0).CongruenceClass.IsRootLattice);
+        Assert.Equal(3, v.CongruenceClass.Order);
+    }
+}
