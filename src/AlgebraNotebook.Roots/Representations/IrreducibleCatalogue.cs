@@ -20,7 +20,7 @@ internal sealed class IrreducibleCatalogue
         _budget = budget;
     }
 
-    /// <summary>Thrown internally when the search needs more dimension evaluations than the budget.</summary>
+    /// <summary>Thrown internally when the search needs more dimension evaluations (or listed weights) than the budget.</summary>
     public sealed class BudgetExceededException : Exception
     {
     }
@@ -55,14 +55,16 @@ internal sealed class IrreducibleCatalogue
             }
             else
             {
-                for (var v = 0; ; v++)
+                // Dimension grows with the last label, so the admissible values are 0..largest: bisect, then list them.
+                var largest = LargestAtMost(node, labels, maximum);
+                if (found.Count + (long)largest + 1 > _budget)
+                {
+                    throw new BudgetExceededException();
+                }
+
+                for (var v = 0; v <= largest; v++)
                 {
                     labels[node] = v;
-                    if (Evaluate(labels) > maximum)
-                    {
-                        break;
-                    }
-
                     found.Add((int[])labels.Clone());
                 }
             }
@@ -87,19 +89,35 @@ internal sealed class IrreducibleCatalogue
 
     private void Bisect(int node, int[] labels, BigInteger target, List<int[]> found)
     {
-        labels[node] = 0;
-        if (Evaluate(labels) > target)
+        var low = LargestAtMost(node, labels, target);
+        if (low < 0)
         {
             return;
         }
 
-        // Find an upper bound by doubling, then bisect for the exact dimension.
+        labels[node] = low;
+        if (Evaluate(labels) == target)
+        {
+            found.Add((int[])labels.Clone());
+        }
+    }
+
+    /// <summary>The largest value of the label at <paramref name="node"/> keeping the dimension at most the bound; -1 if none.</summary>
+    private int LargestAtMost(int node, int[] labels, BigInteger bound)
+    {
+        labels[node] = 0;
+        if (Evaluate(labels) > bound)
+        {
+            return -1;
+        }
+
+        // Find an upper bound by doubling, then bisect for the largest admissible value.
         var low = 0;
         var high = 1;
         while (true)
         {
             labels[node] = high;
-            if (Evaluate(labels) > target)
+            if (Evaluate(labels) > bound)
             {
                 break;
             }
@@ -108,7 +126,7 @@ internal sealed class IrreducibleCatalogue
             high = high > int.MaxValue / 2 ? int.MaxValue : high * 2;
             if (low == int.MaxValue)
             {
-                break;
+                return low;
             }
         }
 
@@ -116,7 +134,7 @@ internal sealed class IrreducibleCatalogue
         {
             var middle = low + (high - low) / 2;
             labels[node] = middle;
-            if (Evaluate(labels) > target)
+            if (Evaluate(labels) > bound)
             {
                 high = middle;
             }
@@ -126,11 +144,7 @@ internal sealed class IrreducibleCatalogue
             }
         }
 
-        labels[node] = low;
-        if (Evaluate(labels) == target)
-        {
-            found.Add((int[])labels.Clone());
-        }
+        return low;
     }
 
     /// <summary>

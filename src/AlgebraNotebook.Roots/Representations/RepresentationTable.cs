@@ -34,7 +34,7 @@ public static class RepresentationTable
     /// in the naming rule of <see cref="IrreducibleRepresentation.Name"/> (Casimir, then labels descending). The search walks
     /// the Dynkin labels depth first, stopping each branch when Weyl's formula passes the bound (the dimension grows strictly
     /// with every label). Throws <see cref="BeyondCapabilityException"/> when more than <see cref="SearchBudget"/> evaluations
-    /// would be needed (e.g. su(2) up to ten million).
+    /// or rows would be needed (e.g. su(2) up to ten million).
     /// </summary>
     /// <param name="system">The algebra.</param>
     /// <param name="maximumDimension">Largest dimension listed, at least 1.</param>
@@ -56,7 +56,7 @@ public static class RepresentationTable
         {
             throw new BeyondCapabilityException(
                 $"Listing the irreducibles of {system.Type} up to dimension {maximumDimension} needs more than {SearchBudget} " +
-                "evaluations of Weyl's formula; lower the bound.");
+                "evaluations of Weyl's formula or rows; lower the bound.");
         }
 
         var irreps = found.Select(labels => IrreducibleRepresentation.OfValidated(system, labels)).ToList();
