@@ -261,7 +261,7 @@ internal sealed partial class WeightGeometry
         return 0;
     }
 
-    private int[] RootLabels(int[] coordinates)
+    public int[] RootLabels(int[] coordinates)
     {
         var labels = new int[Rank];
         for (var i = 0; i < Rank; i++)
