@@ -77,7 +77,8 @@ internal static class Freudenthal
 
     /// <summary>
     /// Multiplicities of the dominant weights only, using Weyl-orbit symmetry: m(mu + k beta) is read at the dominant
-    /// representative of mu + k beta (Moody and Patera, Bull. AMS 7 (1982)). Returned in the order of <see cref="DominantWeights"/>.
+    /// representative of mu + k beta, and the positive roots are summed one orbit of the stabiliser of mu at a time
+    /// (Moody and Patera, Bull. AMS 7 (1982)). Returned in the order of <see cref="DominantWeights"/>.
     /// </summary>
     public static List<(int[] Weight, BigInteger Multiplicity)> DominantCharacter(
         WeightGeometry geometry, int[] highest, long cap, CancellationToken cancellationToken)
@@ -107,9 +108,10 @@ internal static class Freudenthal
             else
             {
                 var sum = BigInteger.Zero;
-                for (var r = 0; r < geometry.PositiveRootLabels.Length; r++)
+                foreach (var (r, orbitSize) in geometry.StabiliserRootOrbits(mu))
                 {
                     var root = geometry.PositiveRootLabels[r];
+                    var partial = BigInteger.Zero;
                     Array.Copy(mu, nu, rank);
                     while (true)
                     {
@@ -126,8 +128,10 @@ internal static class Freudenthal
                             break;
                         }
 
-                        sum += mk * geometry.ScaledInnerProduct(nu, root);
+                        partial += mk * geometry.ScaledInnerProduct(nu, root);
                     }
+
+                    sum += orbitSize * partial;
                 }
 
                 for (var i = 0; i < rank; i++)
