@@ -12,12 +12,24 @@ namespace AlgebraNotebook.Roots;
 public sealed partial class WeylGroup
 {
     private readonly int _rank;
+
+    // For node i: the nodes j with A_ji != 0 and those entries (the labels of alpha_i), so a reflection touches only them.
+    private readonly int[][] _touchedNodes;
+    private readonly int[][] _touchedEntries;
     private BigInteger? _order;
 
     internal WeylGroup(RootSystem system)
     {
         System = system;
         _rank = system.Rank;
+        _touchedNodes = new int[_rank][];
+        _touchedEntries = new int[_rank][];
+        for (var i = 0; i < _rank; i++)
+        {
+            var nodes = Enumerable.Range(0, _rank).Where(j => system.CartanEntry(j, i) != 0).ToArray();
+            _touchedNodes[i] = nodes;
+            _touchedEntries[i] = nodes.Select(j => system.CartanEntry(j, i)).ToArray();
+        }
     }
 
     /// <summary>The root system.</summary>
@@ -97,9 +109,11 @@ public sealed partial class WeylGroup
             return;
         }
 
-        for (var j = 0; j < labels.Length; j++)
+        var nodes = _touchedNodes[i];
+        var entries = _touchedEntries[i];
+        for (var k = 0; k < nodes.Length; k++)
         {
-            labels[j] -= c * System.CartanEntry(j, i);
+            labels[nodes[k]] -= c * entries[k];
         }
     }
 
