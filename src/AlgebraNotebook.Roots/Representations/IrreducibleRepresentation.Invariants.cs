@@ -50,7 +50,7 @@ public sealed partial class IrreducibleRepresentation
     public CongruenceClass CongruenceClass => System.CongruenceClass(HighestWeight);
 
     /// <summary>The pairing &lt;lambda, 2 rho^vee&gt; (sum over positive roots of &lt;lambda, beta^vee&gt;) used by <see cref="Reality"/>.</summary>
-    public long HeightPairingWithTwiceRhoCheck => Geometry.HeightPairing(_labels);
+    public long PairingWithTwiceRhoCheck => Geometry.HeightPairing(_labels);
 
     /// <summary>
     /// The irreducible factors of V(lambda) over the simple factors of a semisimple algebra (V(lambda) is their outer tensor

@@ -163,10 +163,19 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
 
     /// <summary>
     /// The number of distinct weights: the sum of the Weyl orbit sizes |W| / |W_mu| of the dominant weights (needs the
-    /// dominant weights, not the multiplicities).
+    /// dominant weights, not their multiplicities; throws <see cref="BeyondCapabilityException"/> beyond
+    /// <see cref="DefaultMaximumDominantWeights"/> dominant weights).
     /// </summary>
-    public BigInteger NumberOfDistinctWeights =>
-        DominantWeights.Aggregate(BigInteger.Zero, (sum, p) => sum + Geometry.OrbitSize(p.Weight.Labels));
+    public BigInteger NumberOfDistinctWeights => CountDistinctWeights(CancellationToken.None);
+
+    private BigInteger CountDistinctWeights(CancellationToken cancellationToken)
+    {
+        // The dominant weight set alone (no multiplicities) is enough, and much cheaper than Freudenthal's formula.
+        var dominants = _dominantWeights is not null
+            ? _dominantWeights.Select(p => p.Weight.Labels)
+            : Freudenthal.DominantWeights(Geometry, _labels, DefaultMaximumDominantWeights, cancellationToken);
+        return dominants.Aggregate(BigInteger.Zero, (sum, labels) => sum + Geometry.OrbitSize(labels));
+    }
 
     /// <summary>
     /// All weights with multiplicities, expanding the Weyl orbit of each dominant weight (listed in the order of
@@ -191,7 +200,7 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
 
         if (Dimension > maximumWeights)
         {
-            var count = NumberOfDistinctWeights;
+            var count = CountDistinctWeights(cancellationToken);
             if (count > maximumWeights)
             {
                 throw new BeyondCapabilityException(

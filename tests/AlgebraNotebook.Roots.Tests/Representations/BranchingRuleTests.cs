@@ -65,7 +65,7 @@ public class BranchingRuleTests
     public void Principal_su2_of_G2()
     {
         var g2 = RootSystem.Of("G2");
-        var coefficients = new[] { Irrep("G2", 1, 0).HeightPairingWithTwiceRhoCheck, Irrep("G2", 0, 1).HeightPairingWithTwiceRhoCheck };
+        var coefficients = new[] { Irrep("G2", 1, 0).PairingWithTwiceRhoCheck, Irrep("G2", 0, 1).PairingWithTwiceRhoCheck };
         var rule = BranchingRule.FromProjection(g2, RootSystem.Of("A1"), new[,] { { (int)coefficients[0], (int)coefficients[1] } });
         Assert.Equal("7", Dimensions(rule.Restrict(Irrep("G2", 1, 0))));
         Assert.Equal("3 11", Dimensions(rule.Restrict(Irrep("G2", 0, 1))));
