@@ -41,6 +41,18 @@ public class BranchingRuleTests
         Assert.Equal("1 16 16 45", Dimensions(rule.Restrict(Irrep("E6", 0, 1, 0, 0, 0, 0))));
     }
 
+    // su(5) > su(3) x su(2) (x u(1)), the standard-model subgroup: 5 = (3, 1) + (1, 2), 10 = (3, 1) + (3, 2) + (1, 1) up to
+    // conjugation of the su(3) factor, 24 = (8, 1) + (1, 3) + (1, 1) + (3, 2) + (3bar, 2) (Slansky 1981 branching tables).
+    [Fact]
+    public void Su5_to_standard_model()
+    {
+        var rule = BranchingRule.ToLevi(RootSystem.Of("A4"), 3);
+        Assert.Equal("A2+A1", rule.Subalgebra.Type.ToString());
+        Assert.Equal(["(1, 2)", "(3, 1)"], rule.Restrict(Irrep("A4", 1, 0, 0, 0)).ExpandedNames);
+        Assert.Equal(["(1, 1)", "(3bar, 1)", "(3, 2)"], rule.Restrict(Irrep("A4", 0, 1, 0, 0)).ExpandedNames);
+        Assert.Equal(["(1, 1)", "(1, 3)", "(3, 2)", "(3bar, 2)", "(8, 1)"], rule.Restrict(Irrep("A4", 1, 0, 0, 1)).ExpandedNames);
+    }
+
     // E8 > E7 (x u(1)): 248 = 133 + 56 + 56 + 1 + 1 + 1 (common practice; E8 > E7 x su(2) gives (133,1) + (1,3) + (56,2)).
     [Fact]
     public void E8_to_E7()

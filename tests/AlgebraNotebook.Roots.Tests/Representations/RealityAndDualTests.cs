@@ -10,6 +10,8 @@ public class RealityAndDualTests
     [Theory]
     [InlineData("A1", new[] { 1 }, Reality.PseudoReal)]
     [InlineData("A1", new[] { 2 }, Reality.Real)]
+    [InlineData("B1", new[] { 2 }, Reality.Real)] // so(3) vector; in B1 labels omega_1 is the spinor (the doublet)
+    [InlineData("B1", new[] { 1 }, Reality.PseudoReal)]
     [InlineData("A2", new[] { 1, 0 }, Reality.Complex)]
     [InlineData("A2", new[] { 1, 1 }, Reality.Real)]
     [InlineData("E7", new[] { 0, 0, 0, 0, 0, 0, 1 }, Reality.PseudoReal)]
