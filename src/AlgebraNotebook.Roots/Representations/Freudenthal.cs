@@ -93,6 +93,7 @@ internal static class Freudenthal
         }
 
         var topNorm = geometry.ScaledInnerProduct(shifted, shifted);
+        var topLevel = geometry.Level(highest);
         var result = new List<(int[] Weight, BigInteger Multiplicity)>(dominants.Count);
         var nu = new int[rank];
         var reduced = new int[rank];
@@ -111,6 +112,8 @@ internal static class Freudenthal
                 foreach (var (r, orbitSize) in geometry.StabiliserRootOrbits(mu))
                 {
                     var root = geometry.PositiveRootLabels[r];
+                    var rootLevel = geometry.Level(root);
+                    var level = geometry.Level(mu);
                     var partial = BigInteger.Zero;
                     Array.Copy(mu, nu, rank);
                     while (true)
@@ -118,6 +121,13 @@ internal static class Freudenthal
                         for (var i = 0; i < rank; i++)
                         {
                             nu[i] += root[i];
+                        }
+
+                        // Every weight lies below lambda, so a higher level ends the string without reflecting.
+                        level += rootLevel;
+                        if (level > topLevel)
+                        {
+                            break;
                         }
 
                         Array.Copy(nu, reduced, rank);

@@ -66,7 +66,8 @@ public class CasimirAndIndexTests
     }
 
     // Slansky 1981 index tables (Dynkin convention, su(N) fundamental = 1), values from memory:
-    // su(3) 6: 5, 10: 15, 27: 54; E6 27: 6, 78: 24; E8 248: 60; G2 7: 2, 14: 8, 27: 18; so(10) 10: 2, 16: 4.
+    // su(3) 6: 5, 10: 15, 27: 54; E6 27: 6, 78: 24, 351: 150, 351': 168, 650: 300; E7 56: 12, 133: 36, 912: 360;
+    // E8 248: 60; F4 26: 6, 52: 18; G2 7: 2, 14: 8, 27: 18; so(10) 10: 2, 16: 4, 45: 16, 126: 70, 144: 68.
     [Theory]
     [InlineData("A2", new[] { 2, 0 }, 5)]
     [InlineData("A2", new[] { 3, 0 }, 15)]
@@ -79,6 +80,17 @@ public class CasimirAndIndexTests
     [InlineData("G2", new[] { 2, 0 }, 18)]
     [InlineData("D5", new[] { 1, 0, 0, 0, 0 }, 2)]
     [InlineData("D5", new[] { 0, 0, 0, 1, 0 }, 4)]
+    [InlineData("D5", new[] { 0, 1, 0, 0, 0 }, 16)]
+    [InlineData("D5", new[] { 0, 0, 0, 2, 0 }, 70)]
+    [InlineData("D5", new[] { 1, 0, 0, 1, 0 }, 68)]
+    [InlineData("E6", new[] { 0, 0, 1, 0, 0, 0 }, 150)]
+    [InlineData("E6", new[] { 2, 0, 0, 0, 0, 0 }, 168)]
+    [InlineData("E6", new[] { 1, 0, 0, 0, 0, 1 }, 300)]
+    [InlineData("E7", new[] { 0, 0, 0, 0, 0, 0, 1 }, 12)]
+    [InlineData("E7", new[] { 1, 0, 0, 0, 0, 0, 0 }, 36)]
+    [InlineData("E7", new[] { 0, 1, 0, 0, 0, 0, 0 }, 360)]
+    [InlineData("F4", new[] { 0, 0, 0, 1 }, 6)]
+    [InlineData("F4", new[] { 1, 0, 0, 0 }, 18)]
     public void Dynkin_indices_match_Slansky_tables(string type, int[] labels, int expected)
     {
         Assert.Equal(new Rational(expected), Irrep(type, labels).DynkinIndex(IndexConvention.Dynkin));
