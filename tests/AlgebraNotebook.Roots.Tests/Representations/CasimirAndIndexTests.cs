@@ -107,6 +107,31 @@ public class CasimirAndIndexTests
         Assert.Equal(a.DynkinIndex() * b.Dimension + b.DynkinIndex() * a.Dimension, sum);
     }
 
+    // The index as a trace over the Cartan subalgebra: with long roots of squared length 2, the sum over weights of
+    // m(mu) (mu, mu) equals rank * l(V) in Dynkin's convention (twice the physics value), because tr_V(XY) is a multiple of
+    // the invariant form on a simple algebra (common practice; this is how Dynkin defined the index).
+    [Theory]
+    [InlineData("A3", new[] { 1, 1, 0 })]
+    [InlineData("B3", new[] { 0, 0, 2 })]
+    [InlineData("C3", new[] { 1, 0, 1 })]
+    [InlineData("G2", new[] { 1, 1 })]
+    [InlineData("F4", new[] { 0, 0, 0, 1 })]
+    [InlineData("E6", new[] { 1, 0, 0, 0, 0, 0 })]
+    public void Index_equals_the_trace_of_the_Cartan_part(string type, int[] labels)
+    {
+        var v = Irrep(type, labels);
+        var system = v.System;
+        var trace = v.AllWeights().Aggregate(Rational.Zero, (sum, w) => sum + system.InnerProduct(w.Weight, w.Weight) * w.Multiplicity);
+        Assert.Equal(v.DynkinIndex(IndexConvention.Dynkin) * system.Rank, trace);
+    }
+
+    // Killing normalisation of the su(2) doublet: (3/4) / 2 = 3/8 (common practice).
+    [Fact]
+    public void Su2_doublet_Killing_Casimir_is_three_eighths()
+    {
+        Assert.Equal(new Rational(3, 8), Irrep("A1", 1).QuadraticCasimir(CasimirNormalisation.Killing));
+    }
+
     [Fact]
     public void Semisimple_index_is_per_component_and_whole_algebra_index_is_refused()
     {
