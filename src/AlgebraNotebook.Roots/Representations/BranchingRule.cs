@@ -1,5 +1,6 @@
 using System.Numerics;
 using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Scalars;
 
 namespace AlgebraNotebook.Roots.Representations;
 
@@ -14,6 +15,7 @@ namespace AlgebraNotebook.Roots.Representations;
 public sealed class BranchingRule
 {
     private readonly int[,] _projection;
+    private int[]? _chargeNodes;
 
     private BranchingRule(RootSystem system, RootSystem subalgebra, int[,] projection, string description)
     {
@@ -39,7 +41,7 @@ public sealed class BranchingRule
     /// The semisimple part of the Levi subalgebra obtained by deleting the given nodes (1-based, Bourbaki numbering) from
     /// the Dynkin diagram. A weight restricts by dropping the labels of the deleted nodes; the remaining nodes are matched
     /// to the Bourbaki numbering of each simple factor of the remaining diagram, factors ordered by their smallest original
-    /// node. The U(1) charges carried by the deleted nodes are not reported.
+    /// node. <see cref="RestrictWithCharges"/> also reports the charges under the centre of the Levi subalgebra.
     /// </summary>
     /// <param name="system">The algebra.</param>
     /// <param name="deletedNodes">Nodes to delete, 1-based; at least one node must remain.</param>
@@ -85,7 +87,10 @@ public sealed class BranchingRule
 
         var deleted = string.Join(", ", deletedNodes.OrderBy(n => n));
         return new BranchingRule(system, subalgebra, projection,
-            $"{system.Type} > {subalgebra.Type} (Levi, deleting node{(deletedNodes.Length == 1 ? "" : "s")} {deleted})");
+            $"{system.Type} > {subalgebra.Type} (Levi, deleting node{(deletedNodes.Length == 1 ? "" : "s")} {deleted})")
+        {
+            _chargeNodes = deletedNodes.Distinct().OrderBy(n => n).Select(n => n - 1).ToArray(),
+        };
     }
 
     /// <summary>
@@ -341,6 +346,101 @@ public sealed class BranchingRule
         }
 
         return result;
+    }
+
+    /// <summary>True for rules made by <see cref="ToLevi"/>, which can report U(1) charges.</summary>
+    public bool HasCharges => _chargeNodes is not null;
+
+    /// <summary>
+    /// For a Levi rule: restricts V(lambda) to the Levi subalgebra including its centre. The charge of a weight mu under the
+    /// deleted node j is &lt;mu, omega_j^vee&gt;, the coefficient of alpha_j when mu is written in simple roots (the
+    /// fundamental coweight of node j generates one U(1) of the centre); one charge per deleted node, in increasing node
+    /// order. Physics normalisations (hypercharge etc.) are rational multiples of these. Terms are ordered by charges, then
+    /// as in <see cref="RepresentationSum"/>. Throws <see cref="ExactArgumentException"/> for rules not made by
+    /// <see cref="ToLevi"/>.
+    /// </summary>
+    /// <param name="representation">An irreducible representation of <see cref="System"/>.</param>
+    /// <param name="cancellationToken">Cancels the computation.</param>
+    /// <param name="maximumWeights">Cap on the number of distinct weights of the representation.</param>
+    public IReadOnlyList<ChargedTerm> RestrictWithCharges(
+        IrreducibleRepresentation representation,
+        CancellationToken cancellationToken = default,
+        long maximumWeights = IrreducibleRepresentation.DefaultMaximumWeights)
+    {
+        if (_chargeNodes is null)
+        {
+            throw new ExactArgumentException($"{Description}: charges are defined for Levi subalgebras (BranchingRule.ToLevi) only.", nameof(representation));
+        }
+
+        // Validates the projection and the representation, and checks dimension, before the sectors are split.
+        Restrict(representation, cancellationToken, maximumWeights);
+        var geometry = representation.Geometry;
+        var subRank = Subalgebra.Rank;
+        var rank = System.Rank;
+        var sectors = new Dictionary<string, (Rational[] Charges, Dictionary<WeightKey, BigInteger> Weights)>();
+        foreach (var (weight, multiplicity) in representation.AllWeightsRaw(maximumWeights, cancellationToken))
+        {
+            var charges = new Rational[_chargeNodes.Length];
+            for (var c = 0; c < charges.Length; c++)
+            {
+                var sum = Rational.Zero;
+                for (var i = 0; i < rank; i++)
+                {
+                    if (weight[i] != 0)
+                    {
+                        sum += geometry.InverseCartan[_chargeNodes[c], i] * weight[i];
+                    }
+                }
+
+                charges[c] = sum;
+            }
+
+            var chargeKey = string.Join(",", charges);
+            if (!sectors.TryGetValue(chargeKey, out var sector))
+            {
+                sector = (charges, new Dictionary<WeightKey, BigInteger>());
+                sectors[chargeKey] = sector;
+            }
+
+            var image = new int[subRank];
+            for (var r = 0; r < subRank; r++)
+            {
+                for (var j = 0; j < rank; j++)
+                {
+                    image[r] += _projection[r, j] * weight[j];
+                }
+            }
+
+            var key = new WeightKey(image);
+            sector.Weights[key] = sector.Weights.GetValueOrDefault(key) + multiplicity;
+        }
+
+        var result = new List<ChargedTerm>();
+        foreach (var (charges, weights) in sectors.Values.OrderBy(s => s.Charges, Comparer<Rational[]>.Create(CompareCharges)))
+        {
+            var terms = CharacterPeeling.Peel(Subalgebra, CharacterPeeling.DominantPart(weights), cancellationToken);
+            CharacterPeeling.RequireNonNegative(terms, Description);
+            foreach (var term in new RepresentationSum(Subalgebra, terms).Terms)
+            {
+                result.Add(new ChargedTerm(term.Irreducible, charges, term.Multiplicity));
+            }
+        }
+
+        return result;
+    }
+
+    private static int CompareCharges(Rational[] a, Rational[] b)
+    {
+        for (var i = 0; i < a.Length; i++)
+        {
+            var c = a[i].CompareTo(b[i]);
+            if (c != 0)
+            {
+                return c;
+            }
+        }
+
+        return 0;
     }
 
     /// <summary>The description.</summary>
