@@ -157,7 +157,7 @@ internal sealed partial class WeightGeometry
             long bottom = 0;
             for (var i = 0; i < Rank; i++)
             {
-                top += (long)(highest[i] + 1) * coroot[i];
+                top += ((long)highest[i] + 1) * coroot[i];
                 bottom += coroot[i];
             }
 

@@ -99,6 +99,13 @@ public class IrreducibleDimensionTests
         Assert.Equal(BigInteger.Pow(100, 120), Irrep("E8", labels).Dimension);
     }
 
+    // su(2) with the largest label: dimension n + 1 without overflow (common practice).
+    [Fact]
+    public void Largest_label_does_not_overflow()
+    {
+        Assert.Equal(new BigInteger(int.MaxValue) + 1, Irrep("A1", int.MaxValue).Dimension);
+    }
+
     [Fact]
     public void Negative_labels_and_wrong_rank_are_rejected_with_the_input_named()
     {
