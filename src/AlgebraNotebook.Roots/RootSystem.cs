@@ -25,7 +25,7 @@ namespace AlgebraNotebook.Roots;
 public sealed partial class RootSystem
 {
     /// <summary>The largest total rank accepted by <see cref="Of(CartanType)"/>.</summary>
-    public const int MaximumRank = 200;
+    public const int MaximumRank = 100;
 
     private static readonly ConcurrentDictionary<CartanType, RootSystem> Cache = new();
 
