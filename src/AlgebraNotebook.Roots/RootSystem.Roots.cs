@@ -37,10 +37,26 @@ public sealed partial class RootSystem
         }
     }
 
-    /// <summary>The highest root of each simple component, embedded in this system's coordinates (component order).</summary>
-    public IReadOnlyList<Root> HighestRoots => Enumerable.Range(0, Type.Components.Count)
-        .Select(c => _positive.Where(r => IsInComponent(r, c)).MaxBy(r => r.Height)!)
-        .ToArray();
+    /// <summary>
+    /// The highest root of each irreducible component, in this system's coordinates, ordered by the first node of the
+    /// component: the maximal positive roots (no beta + alpha_i is a root), one per component (two for D2).
+    /// </summary>
+    public IReadOnlyList<Root> HighestRoots
+    {
+        get
+        {
+            var set = _positive.Select(r => Weight.Own(r.SimpleRootCoordinates)).ToHashSet();
+            return _positive
+                .Where(r => Enumerable.Range(0, Rank).All(i =>
+                {
+                    var up = r.SimpleRootCoordinates;
+                    up[i]++;
+                    return !set.Contains(Weight.Own(up));
+                }))
+                .OrderBy(r => r.Coordinates.IndexOfAnyExcept(0))
+                .ToArray();
+        }
+    }
 
     /// <summary>The highest short root of a simple system (equal to the highest root when the system is simply laced).</summary>
     /// <exception cref="ExactArgumentException">The system is not simple.</exception>
@@ -70,27 +86,17 @@ public sealed partial class RootSystem
 
     internal void RequireSimple(string what)
     {
+        if (IsD2)
+        {
+            throw new ExactArgumentException(
+                $"D2 is isomorphic to A1+A1 and not simple: {what} is defined for each of its two A1 components (use A1+A1).", "this");
+        }
+
         if (!IsSimple)
         {
             throw new ExactArgumentException(
                 $"{Type} is not simple: {what} is defined for each simple component separately (see Components).", "this");
         }
-    }
-
-    private bool IsInComponent(Root root, int component)
-    {
-        var start = _componentOffsets[component];
-        var end = start + Type.Components[component].Rank;
-        var coordinates = root.Coordinates;
-        for (var i = 0; i < coordinates.Length; i++)
-        {
-            if (coordinates[i] != 0 && (i < start || i >= end))
-            {
-                return false;
-            }
-        }
-
-        return true;
     }
 
     private Root Negate(Root root)
