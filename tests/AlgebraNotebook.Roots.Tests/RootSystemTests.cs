@@ -213,4 +213,12 @@ public class RootSystemTests
         Assert.Equal(new[] { 1, 1 }, d2.Exponents);
         Assert.Equal(new[] { "[1, 0]", "[0, 1]" }, d2.HighestRoots.Select(r => r.ToString()));
     }
+
+    [Fact]
+    public void Ranks_above_the_limit_are_refused_with_the_rank_named()
+    {
+        var error = Assert.Throws<BeyondCapabilityException>(() => RootSystem.Of("A101"));
+        Assert.Contains("rank 101", error.Message);
+        Assert.Equal(100, RootSystem.MaximumRank);
+    }
 }
