@@ -210,7 +210,7 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
         }
 
         var result = new List<(int[] Weight, BigInteger Multiplicity)>();
-        foreach (var dominant in DominantWeights)
+        foreach (var dominant in ComputeDominantWeights(DefaultMaximumDominantWeights, cancellationToken))
         {
             foreach (var weight in Geometry.Orbit(dominant.Weight.Labels, cancellationToken))
             {
