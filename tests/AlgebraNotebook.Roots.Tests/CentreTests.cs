@@ -6,7 +6,7 @@ public class CentreTests
 {
     [Theory]
     // Structure of P/Q (centre of the simply connected group): Bourbaki Plates I-IX, item (VIII); Humphreys,
-    // Introduction to Lie Algebras, 13.1 and Exercise 13.5; common practice.
+    // Introduction to Lie Algebras, ch. 13 (from memory); common practice.
     [InlineData("A1", "Z2")]
     [InlineData("A5", "Z6")]
     [InlineData("B4", "Z2")]

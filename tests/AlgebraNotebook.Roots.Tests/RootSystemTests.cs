@@ -43,7 +43,7 @@ public class RootSystemTests
         Assert.Equal(PublishedMarks(t.Family, t.Rank), system.Marks);
         Assert.Equal(PublishedMarks(t.Family, t.Rank), system.HighestRoot.SimpleRootCoordinates);
 
-        // theta is long, dominant, and the Coxeter number is its height plus one (Humphreys, Reflection Groups 3.20).
+        // theta is long, dominant, and the Coxeter number is its height plus one (Humphreys, Reflection Groups, ch. 3, around 3.20; from memory).
         Assert.True(system.HighestRoot.IsLong);
         Assert.True(system.HighestRoot.AsWeight.IsDominant);
         Assert.Equal(system.CoxeterNumber, system.HighestRoot.Height + 1);
