@@ -51,7 +51,7 @@ public sealed class ZassenhausExponents
     public override string ToString()
     {
         var builder = new StringBuilder();
-        builder.Append($"e^({X} + {Y}) = e^{X} e^{Y} e^(C2) e^(C3) ... e^(C{Degree}) ..., factors on the right, Lyndon basis with {Algebra.Alphabet}");
+        builder.Append($"e^({X} + {Y}) = e^{X} e^{Y} e^(C2) e^(C3) e^(C4) ... (factors on the right; C2..C{Degree} below, Lyndon basis with {Algebra.Alphabet})");
         for (var n = 2; n <= Degree; n++)
         {
             builder.Append('\n').Append($"C{n} = {_exponents[n - 2]}");
