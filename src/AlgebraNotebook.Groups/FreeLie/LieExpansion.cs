@@ -1,4 +1,5 @@
 using System.Collections.Concurrent;
+using System.Numerics;
 using AlgebraNotebook.Exact.Scalars;
 
 namespace AlgebraNotebook.Groups.FreeLie;
@@ -104,21 +105,20 @@ internal static class LieExpansion
 
     /// <summary>
     /// Fast projection of a dense homogeneous element (index = base-k digits of the word): all coefficients are put over
-    /// one common denominator and peeled in 64-bit integers with overflow checks; on overflow the reference variant runs.
+    /// one common denominator and peeled in 128-bit integers with overflow checks; on overflow the reference variant runs.
     /// Cost: sum over Lyndon words w with non-zero coordinate of |P(u)| |P(v)| for the standard factorisation w = uv.
     /// </summary>
     public static bool TryProjectDense(int alphabetSize, int degree, Rational[] dense, List<(LyndonWord Word, Rational Coefficient)> result)
     {
         var start = result.Count;
-        try
+        var scaled = TryScaleToIntegers(dense, out var denominator);
+        if (scaled is not null)
         {
-            if (TryProjectDenseInt64(alphabetSize, degree, dense, result, out var ok))
+            var verdict = TryProjectInteger(alphabetSize, degree, scaled, denominator, result);
+            if (verdict.HasValue)
             {
-                return ok;
+                return verdict.Value;
             }
-        }
-        catch (OverflowException)
-        {
         }
 
         result.RemoveRange(start, result.Count - start);
@@ -134,40 +134,61 @@ internal static class LieExpansion
         return TryProjectReference(sparse, result);
     }
 
-    /// <summary>Returns false (without a verdict) when the common denominator does not fit; throws OverflowException on overflow.</summary>
-    private static bool TryProjectDenseInt64(int k, int n, Rational[] dense, List<(LyndonWord Word, Rational Coefficient)> result, out bool isLie)
+    /// <summary>
+    /// Projection of the homogeneous element values / denominator given by a dense 128-bit integer array, which is
+    /// overwritten. Returns null (and leaves <paramref name="result"/> as it was) when an intermediate value overflows.
+    /// </summary>
+    public static bool? TryProjectInteger(int k, int n, Int128[] values, BigInteger denominator, List<(LyndonWord Word, Rational Coefficient)> result)
     {
-        isLie = false;
-        var denominator = System.Numerics.BigInteger.One;
+        var start = result.Count;
+        try
+        {
+            return PeelInteger(k, n, values, denominator, result);
+        }
+        catch (OverflowException)
+        {
+            result.RemoveRange(start, result.Count - start);
+            return null;
+        }
+    }
+
+    private static Int128[]? TryScaleToIntegers(Rational[] dense, out BigInteger denominator)
+    {
+        denominator = BigInteger.One;
+        var limit = (BigInteger)Int128.MaxValue;
         foreach (var c in dense)
         {
             if (!c.IsZero && !c.IsInteger)
             {
-                denominator = denominator / System.Numerics.BigInteger.GreatestCommonDivisor(denominator, c.Denominator) * c.Denominator;
-                if (denominator > long.MaxValue)
+                denominator = denominator / BigInteger.GreatestCommonDivisor(denominator, c.Denominator) * c.Denominator;
+                if (denominator > limit)
                 {
-                    return false;
+                    return null;
                 }
             }
         }
 
-        var scaled = new long[dense.Length];
+        var scaled = new Int128[dense.Length];
         for (var i = 0; i < dense.Length; i++)
         {
             if (!dense[i].IsZero)
             {
                 var numerator = dense[i].Numerator * (denominator / dense[i].Denominator);
-                if (numerator > long.MaxValue || numerator < long.MinValue)
+                if (BigInteger.Abs(numerator) > limit)
                 {
-                    return false;
+                    return null;
                 }
 
-                scaled[i] = (long)numerator;
+                scaled[i] = (Int128)numerator;
             }
         }
 
+        return scaled;
+    }
+
+    private static bool PeelInteger(int k, int n, Int128[] scaled, BigInteger denominator, List<(LyndonWord Word, Rational Coefficient)> result)
+    {
         var expansions = new DenseExpansionCache(k);
-        var d = new Rational(denominator);
         for (var i = 0; i < scaled.Length; i++)
         {
             var c = scaled[i];
@@ -179,10 +200,10 @@ internal static class LieExpansion
             var word = Word.FromDenseIndex(i, k, n);
             if (!LyndonWord.IsLyndon(word))
             {
-                return true;
+                return false;
             }
 
-            result.Add((LyndonWord.FromTrusted(word), new Rational(c) / d));
+            result.Add((LyndonWord.FromTrusted(word), new Rational((BigInteger)c, denominator)));
             if (n == 1)
             {
                 scaled[i] = 0;
@@ -210,7 +231,6 @@ internal static class LieExpansion
             }
         }
 
-        isLie = true;
         return true;
     }
 

@@ -1,3 +1,4 @@
+using System.Numerics;
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Groups.FreeLie;
@@ -85,6 +86,19 @@ public static class BakerCampbellHausdorff
         }
 
         (limits ?? SeriesLimits.Default).Check(what, algebra.Alphabet.Count, degree);
+        var order = Math.Min(degree + 1, factors.Min(f => f.Order));
+        var fast = TryLogOfLinearProduct(algebra, factors, degree, order);
+        if (fast is not null)
+        {
+            return fast;
+        }
+
+        return LogOfProductRational(algebra, factors, degree, order);
+    }
+
+    /// <summary>The reference variant: rational dense series, any Lie factors.</summary>
+    internal static LieSeries LogOfProductRational(FreeLieAlgebra algebra, IReadOnlyList<LieSeries> factors, int degree, int order)
+    {
         var k = algebra.Alphabet.Count;
         var product = DenseWordSeries.One(k, degree);
         foreach (var factor in factors)
@@ -92,8 +106,69 @@ public static class BakerCampbellHausdorff
             product = DenseWordSeries.Multiply(product, DenseWordSeries.FromLie(factor, degree).Exponential());
         }
 
-        var log = product.Logarithm();
-        var order = Math.Min(degree + 1, factors.Min(f => f.Order));
-        return SeriesProjection.ToLieSeries(algebra, log, order);
+        return SeriesProjection.ToLieSeries(algebra, product.Logarithm(), order);
+    }
+
+    /// <summary>
+    /// The fast variant for factors that are linear combinations of generators: scaled 128-bit integer series
+    /// (<see cref="ScaledIntegerWordSeries"/>) and integer peeling. Null when a factor is not linear or a value overflows.
+    /// </summary>
+    internal static LieSeries? TryLogOfLinearProduct(FreeLieAlgebra algebra, IReadOnlyList<LieSeries> factors, int degree, int order)
+    {
+        if (factors.Any(f => f.MaxDegree > 1))
+        {
+            return null;
+        }
+
+        var k = algebra.Alphabet.Count;
+        var common = BigInteger.One;
+        foreach (var f in factors)
+        {
+            foreach (var (_, c) in f.Terms)
+            {
+                common = common / BigInteger.GreatestCommonDivisor(common, c.Denominator) * c.Denominator;
+            }
+        }
+
+        try
+        {
+            var product = ScaledIntegerWordSeries.Zero(k, degree);
+            product.Parts[0][0] = 1;
+            foreach (var f in factors)
+            {
+                var letters = new Int128[k];
+                foreach (var (w, c) in f.Terms)
+                {
+                    letters[w.Word.LetterAt(0)] = checked((Int128)(c.Numerator * (common / c.Denominator)));
+                }
+
+                product = ScaledIntegerWordSeries.Multiply(product, ScaledIntegerWordSeries.ExponentialOfLinear(k, degree, letters));
+            }
+
+            var log = product.ScaledLogarithm(out var lcm);
+            var terms = new List<(LyndonWord Word, Rational Coefficient)>();
+            var last = Math.Min(degree, order - 1);
+            var factorial = BigInteger.One;
+            for (var d = 1; d <= last; d++)
+            {
+                factorial *= d;
+                var verdict = LieExpansion.TryProjectInteger(k, d, log.Parts[d], factorial * BigInteger.Pow(common, d) * lcm, terms);
+                if (verdict is null)
+                {
+                    return null;
+                }
+
+                if (!verdict.Value)
+                {
+                    throw new InvalidOperationException($"Internal error: the degree-{d} part of the series is not a Lie element.");
+                }
+            }
+
+            return new LieSeries(algebra, terms, order);
+        }
+        catch (OverflowException)
+        {
+            return null;
+        }
     }
 }

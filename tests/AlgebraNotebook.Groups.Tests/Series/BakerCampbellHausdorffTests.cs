@@ -130,3 +130,41 @@ public class BakerCampbellHausdorffTests
         Assert.Throws<ExactArgumentException>(() => new SeriesLimits(0));
     }
 }
+
+public class BakerCampbellHausdorffVariantTests
+{
+    [Fact]
+    public void Scaled_integer_variant_agrees_with_the_rational_reference()
+    {
+        // The rational dense variant is the oracle for the scaled 128-bit integer variant.
+        var algebra = new FreeLieAlgebra("X", "Y", "Z");
+        var x = algebra.Generator("X");
+        var y = algebra.Generator("Y");
+        var z = algebra.Generator("Z");
+        IReadOnlyList<LieSeries>[] cases =
+        [
+            [x, y],
+            [Rational.Half * x, y, Rational.Half * x],
+            [new Rational(-2, 3) * x + new Rational(1, 5) * y, z, x - (new Rational(7, 4) * z)],
+        ];
+        foreach (var factors in cases)
+        {
+            var fast = BakerCampbellHausdorff.TryLogOfLinearProduct(algebra, factors, 6, 7);
+            Assert.NotNull(fast);
+            Assert.Equal(BakerCampbellHausdorff.LogOfProductRational(algebra, factors, 6, 7), fast);
+        }
+    }
+
+    [Fact]
+    public void Overflowing_integer_variant_falls_back_to_the_rational_one()
+    {
+        var algebra = new FreeLieAlgebra("X", "Y");
+        var hugeX = new Rational(System.Numerics.BigInteger.Pow(10, 30)) * algebra.Generator("X");
+        var y = new Rational(1, 3) * algebra.Generator("Y");
+        Assert.Null(BakerCampbellHausdorff.TryLogOfLinearProduct(algebra, [hugeX, y], 5, 6));
+        var result = BakerCampbellHausdorff.ProductOfExponentials([hugeX, y], 5);
+        Assert.Equal(BakerCampbellHausdorff.LogOfProductRational(algebra, [hugeX, y], 5, 6), result);
+        // Homogeneity: the degree-(1,1) coefficient of [X, Y] scales with both factors (1/2 * 10^30 * 1/3).
+        Assert.Equal(new Rational(System.Numerics.BigInteger.Pow(10, 30), 6), result.CoefficientOf("X", "Y"));
+    }
+}
