@@ -172,6 +172,7 @@ public sealed partial class FreeLieAlgebra : IEquatable<FreeLieAlgebra>
             return false;
         }
 
+        var expansions = new DenseExpansions(Alphabet.Count);
         foreach (var group in terms.GroupBy(p => p.Key.Length).OrderBy(g => g.Key))
         {
             var degree = group.Key;
@@ -185,7 +186,7 @@ public sealed partial class FreeLieAlgebra : IEquatable<FreeLieAlgebra>
                     dense[w.DenseIndex(Alphabet.Count)] = c;
                 }
 
-                ok = LieExpansion.TryProjectDense(Alphabet.Count, degree, dense, result);
+                ok = LieExpansion.TryProjectDense(Alphabet.Count, degree, dense, result, expansions);
             }
             else
             {

@@ -108,13 +108,13 @@ internal static class LieExpansion
     /// one common denominator and peeled in 128-bit integers with overflow checks; on overflow the reference variant runs.
     /// Cost: sum over Lyndon words w with non-zero coordinate of |P(u)| |P(v)| for the standard factorisation w = uv.
     /// </summary>
-    public static bool TryProjectDense(int alphabetSize, int degree, Rational[] dense, List<(LyndonWord Word, Rational Coefficient)> result)
+    public static bool TryProjectDense(int alphabetSize, int degree, Rational[] dense, List<(LyndonWord Word, Rational Coefficient)> result, DenseExpansions? expansions = null)
     {
         var start = result.Count;
         var scaled = TryScaleToIntegers(dense, out var denominator);
         if (scaled is not null)
         {
-            var verdict = TryProjectInteger(alphabetSize, degree, scaled, denominator, result);
+            var verdict = TryProjectInteger(alphabetSize, degree, scaled, denominator, result, expansions);
             if (verdict.HasValue)
             {
                 return verdict.Value;
@@ -136,20 +136,83 @@ internal static class LieExpansion
 
     /// <summary>
     /// Projection of the homogeneous element values / denominator given by a dense 128-bit integer array, which is
-    /// overwritten. Returns null (and leaves <paramref name="result"/> as it was) when an intermediate value overflows.
+    /// overwritten. The entries are first divided by their gcd; the peeling then runs in 64-bit integers when they fit,
+    /// else in 128-bit integers. Returns null (and leaves <paramref name="result"/> as it was) when a value overflows.
     /// </summary>
-    public static bool? TryProjectInteger(int k, int n, Int128[] values, BigInteger denominator, List<(LyndonWord Word, Rational Coefficient)> result)
+    public static bool? TryProjectInteger(int k, int n, Int128[] values, BigInteger denominator, List<(LyndonWord Word, Rational Coefficient)> result, DenseExpansions? expansions = null)
     {
+        expansions ??= new DenseExpansions(k);
         var start = result.Count;
+        Int128 gcd = 0;
+        foreach (var v in values)
+        {
+            if (v != 0)
+            {
+                gcd = Gcd(gcd, v);
+            }
+        }
+
+        if (gcd > 1)
+        {
+            for (var i = 0; i < values.Length; i++)
+            {
+                values[i] /= gcd;
+            }
+
+            var g = (BigInteger)gcd;
+            var common = BigInteger.GreatestCommonDivisor(g, denominator);
+            denominator /= common;
+            var factor = (Int128)(g / common);
+            if (factor != 1)
+            {
+                try
+                {
+                    for (var i = 0; i < values.Length; i++)
+                    {
+                        values[i] = checked(values[i] * factor);
+                    }
+                }
+                catch (OverflowException)
+                {
+                    return null;
+                }
+            }
+        }
+
+        if (Array.TrueForAll(values, v => v > long.MinValue / 4 && v < long.MaxValue / 4))
+        {
+            var small = Array.ConvertAll(values, v => (long)v);
+            try
+            {
+                return PeelInt64(k, n, small, denominator, result, expansions);
+            }
+            catch (OverflowException)
+            {
+                result.RemoveRange(start, result.Count - start);
+            }
+        }
+
         try
         {
-            return PeelInteger(k, n, values, denominator, result);
+            return PeelInt128(k, n, values, denominator, result, expansions);
         }
         catch (OverflowException)
         {
             result.RemoveRange(start, result.Count - start);
             return null;
         }
+    }
+
+    private static Int128 Gcd(Int128 a, Int128 b)
+    {
+        a = Int128.Abs(a);
+        b = Int128.Abs(b);
+        while (b != 0)
+        {
+            (a, b) = (b, a % b);
+        }
+
+        return a;
     }
 
     private static Int128[]? TryScaleToIntegers(Rational[] dense, out BigInteger denominator)
@@ -186,9 +249,56 @@ internal static class LieExpansion
         return scaled;
     }
 
-    private static bool PeelInteger(int k, int n, Int128[] scaled, BigInteger denominator, List<(LyndonWord Word, Rational Coefficient)> result)
+    // The two peeling loops differ only in the integer width; the 64-bit one runs first because it is several times faster.
+    private static bool PeelInt64(int k, int n, long[] scaled, BigInteger denominator, List<(LyndonWord Word, Rational Coefficient)> result, DenseExpansions expansions)
     {
-        var expansions = new DenseExpansionCache(k);
+        for (var i = 0; i < scaled.Length; i++)
+        {
+            var c = scaled[i];
+            if (c == 0)
+            {
+                continue;
+            }
+
+            var word = Word.FromDenseIndex(i, k, n);
+            if (!LyndonWord.IsLyndon(word))
+            {
+                return false;
+            }
+
+            result.Add((LyndonWord.FromTrusted(word), new Rational((BigInteger)c, denominator)));
+            if (n == 1)
+            {
+                scaled[i] = 0;
+                continue;
+            }
+
+            // Subtract c [P(u), P(v)] without materialising P(w): only expansions of lower degree are stored.
+            var (u, v) = LyndonWord.StandardFactorizationCore(word);
+            var (iu, cu) = expansions.Get(u);
+            var (iv, cv) = expansions.Get(v);
+            var shiftV = IntPow(k, v.Degree);
+            var shiftU = IntPow(k, u.Degree);
+            checked
+            {
+                for (var a = 0; a < iu.Length; a++)
+                {
+                    var ca = c * cu[a];
+                    for (var b = 0; b < iv.Length; b++)
+                    {
+                        var product = ca * cv[b];
+                        scaled[(iu[a] * shiftV) + iv[b]] -= product;
+                        scaled[(iv[b] * shiftU) + iu[a]] += product;
+                    }
+                }
+            }
+        }
+
+        return true;
+    }
+
+    private static bool PeelInt128(int k, int n, Int128[] scaled, BigInteger denominator, List<(LyndonWord Word, Rational Coefficient)> result, DenseExpansions expansions)
+    {
         for (var i = 0; i < scaled.Length; i++)
         {
             var c = scaled[i];
@@ -250,49 +360,82 @@ internal static class LieExpansion
         terms[word] = checked((terms.TryGetValue(word, out var existing) ? existing : 0) + value);
     }
 
-    /// <summary>Dense-index expansions of P(w) for one alphabet size, built on demand within one projection.</summary>
-    private sealed class DenseExpansionCache(int k)
+}
+
+/// <summary>
+/// Dense-index expansions of P(w) for one alphabet size (index = base-k digits of the word), built on demand and
+/// shared by all degrees of one computation.
+/// </summary>
+internal sealed class DenseExpansions(int k)
+{
+    private readonly Dictionary<Word, (int[] Indices, long[] Coefficients)> _cache = new();
+    private long[] _scratch = [];
+
+    public int AlphabetSize => k;
+
+    public (int[] Indices, long[] Coefficients) Get(LyndonWord w)
     {
-        private readonly Dictionary<Word, (int[] Indices, long[] Coefficients)> _cache = new();
-
-        public (int[] Indices, long[] Coefficients) Get(LyndonWord w)
+        if (_cache.TryGetValue(w.Word, out var found))
         {
-            if (_cache.TryGetValue(w.Word, out var found))
-            {
-                return found;
-            }
-
-            (int[], long[]) result;
-            if (w.IsLetter)
-            {
-                result = ([w.Word.LetterAt(0)], [1L]);
-            }
-            else
-            {
-                var (u, v) = LyndonWord.StandardFactorizationCore(w.Word);
-                var (iu, cu) = Get(u);
-                var (iv, cv) = Get(v);
-                var shiftV = IntPow(k, v.Degree);
-                var shiftU = IntPow(k, u.Degree);
-                var scratch = new Dictionary<int, long>(iu.Length * iv.Length * 2);
-                for (var a = 0; a < iu.Length; a++)
-                {
-                    for (var b = 0; b < iv.Length; b++)
-                    {
-                        var product = checked(cu[a] * cv[b]);
-                        var left = (iu[a] * shiftV) + iv[b];
-                        var right = (iv[b] * shiftU) + iu[a];
-                        scratch[left] = checked((scratch.TryGetValue(left, out var x) ? x : 0) + product);
-                        scratch[right] = checked((scratch.TryGetValue(right, out var y) ? y : 0) - product);
-                    }
-                }
-
-                var nonzero = scratch.Where(p => p.Value != 0).ToArray();
-                result = (nonzero.Select(p => p.Key).ToArray(), nonzero.Select(p => p.Value).ToArray());
-            }
-
-            _cache[w.Word] = result;
-            return result;
+            return found;
         }
+
+        (int[], long[]) result;
+        if (w.IsLetter)
+        {
+            result = ([w.Word.LetterAt(0)], [1L]);
+        }
+        else
+        {
+            var (u, v) = LyndonWord.StandardFactorizationCore(w.Word);
+            var (iu, cu) = Get(u);
+            var (iv, cv) = Get(v);
+            var shiftV = LieExpansion.IntPow(k, v.Degree);
+            var shiftU = LieExpansion.IntPow(k, u.Degree);
+            var size = LieExpansion.IntPow(k, w.Degree);
+            if (_scratch.Length < size)
+            {
+                _scratch = new long[size];
+            }
+
+            // Accumulate in a scratch array, remembering first touches; read back and clear in the same pass.
+            var touched = new int[iu.Length * iv.Length * 2];
+            var touchedCount = 0;
+            for (var a = 0; a < iu.Length; a++)
+            {
+                for (var b = 0; b < iv.Length; b++)
+                {
+                    var product = checked(cu[a] * cv[b]);
+                    var left = (iu[a] * shiftV) + iv[b];
+                    var right = (iv[b] * shiftU) + iu[a];
+                    touched[touchedCount++] = left;
+                    touched[touchedCount++] = right;
+                    _scratch[left] = checked(_scratch[left] + product);
+                    _scratch[right] = checked(_scratch[right] - product);
+                }
+            }
+
+            var indices = new int[touchedCount];
+            var coefficients = new long[touchedCount];
+            var count = 0;
+            for (var t = 0; t < touchedCount; t++)
+            {
+                var index = touched[t];
+                if (_scratch[index] != 0)
+                {
+                    indices[count] = index;
+                    coefficients[count] = _scratch[index];
+                    count++;
+                    _scratch[index] = 0;
+                }
+            }
+
+            Array.Resize(ref indices, count);
+            Array.Resize(ref coefficients, count);
+            result = (indices, coefficients);
+        }
+
+        _cache[w.Word] = result;
+        return result;
     }
 }

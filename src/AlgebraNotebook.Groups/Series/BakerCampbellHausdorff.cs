@@ -149,10 +149,11 @@ public static class BakerCampbellHausdorff
             var terms = new List<(LyndonWord Word, Rational Coefficient)>();
             var last = Math.Min(degree, order - 1);
             var factorial = BigInteger.One;
+            var expansions = new DenseExpansions(k);
             for (var d = 1; d <= last; d++)
             {
                 factorial *= d;
-                var verdict = LieExpansion.TryProjectInteger(k, d, log.Parts[d], factorial * BigInteger.Pow(common, d) * lcm, terms);
+                var verdict = LieExpansion.TryProjectInteger(k, d, log.Parts[d], factorial * BigInteger.Pow(common, d) * lcm, terms, expansions);
                 if (verdict is null)
                 {
                     return null;

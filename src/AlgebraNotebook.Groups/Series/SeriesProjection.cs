@@ -10,10 +10,11 @@ internal static class SeriesProjection
     {
         var k = algebra.Alphabet.Count;
         var terms = new List<(LyndonWord Word, Rational Coefficient)>();
+        var expansions = new DenseExpansions(k);
         var last = Math.Min(series.MaxDegree, order - 1);
         for (var d = 1; d <= last; d++)
         {
-            if (!LieExpansion.TryProjectDense(k, d, series.Parts[d], terms))
+            if (!LieExpansion.TryProjectDense(k, d, series.Parts[d], terms, expansions))
             {
                 throw new InvalidOperationException($"Internal error: the degree-{d} part of the series is not a Lie element.");
             }

@@ -51,10 +51,11 @@ public static class Zassenhaus
             DenseWordSeries.FromLie(gx + gy, degree).Exponential());
 
         var exponents = new List<LieSeries>();
+        var expansions = new DenseExpansions(k);
         for (var n = 2; n <= degree; n++)
         {
             var terms = new List<(LyndonWord Word, Rational Coefficient)>();
-            if (!LieExpansion.TryProjectDense(k, n, remainder.Parts[n], terms))
+            if (!LieExpansion.TryProjectDense(k, n, remainder.Parts[n], terms, expansions))
             {
                 throw new InvalidOperationException($"Internal error: the degree-{n} Zassenhaus remainder is not a Lie element.");
             }
