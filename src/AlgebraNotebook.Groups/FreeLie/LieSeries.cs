@@ -82,7 +82,11 @@ public sealed class LieSeries : IEquatable<LieSeries>
     {
         if (degree < 1 || degree >= Order)
         {
-            throw new ExactArgumentException($"Degree {degree} is outside the known degrees 1..{(IsExact ? "any" : (Order - 1).ToString())} of this series.", nameof(degree));
+            throw new ExactArgumentException(
+                degree < 1
+                    ? $"Degree {degree} is not a degree of a Lie element (degrees start at 1)."
+                    : $"Degree {degree} is unknown: the series is truncated at order {Order} (known degrees 1..{Order - 1}).",
+                nameof(degree));
         }
 
         return new LieSeries(Algebra, _terms.Where(t => t.Word.Degree == degree), int.MaxValue);

@@ -101,6 +101,28 @@ public class LyndonBasisProjectionTests
     }
 
     [Fact]
+    public void Integer_peeling_in_128_bits_agrees_with_the_reference()
+    {
+        // Entries beyond 64 bits with gcd 1 force the 128-bit peeling loop; the rational reference is the oracle.
+        var algebra = new FreeLieAlgebra("X", "Y");
+        var big = System.Numerics.BigInteger.Pow(2, 70) + 1;
+        var element = new Rational(big) * algebra.Parse("[X, [[X, Y], Y]]") + new Rational(3) * algebra.Parse("[[[X, Y], Y], Y]") - algebra.Parse("[X, [X, [X, Y]]]");
+        var expansion = algebra.Expand(element);
+        var values = new Int128[16];
+        foreach (var (w, c) in expansion.Terms)
+        {
+            values[w.DenseIndex(2)] = (Int128)c.Numerator;
+        }
+
+        var fast = new List<(LyndonWord Word, Rational Coefficient)>();
+        Assert.True(LieExpansion.TryProjectInteger(2, 4, values, System.Numerics.BigInteger.One, fast));
+        var reference = new List<(LyndonWord Word, Rational Coefficient)>();
+        Assert.True(LieExpansion.TryProjectReference(expansion.TermsCore, reference));
+        Assert.Equal(reference, fast);
+        Assert.Equal(new Rational(big), fast.Single(t => t.Word.Word == algebra.Alphabet.Spell("X", "X", "Y", "Y")).Coefficient);
+    }
+
+    [Fact]
     public void Elements_outside_the_free_Lie_algebra_are_rejected()
     {
         var algebra = new FreeLieAlgebra("X", "Y");
