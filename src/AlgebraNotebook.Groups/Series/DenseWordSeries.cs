@@ -141,7 +141,14 @@ internal sealed class DenseWordSeries
     {
         var result = One(AlphabetSize, MaxDegree);
         var power = One(AlphabetSize, MaxDegree);
-        for (var m = 1; m <= MaxDegree; m++)
+        var lowest = 1;
+        while (lowest <= MaxDegree && PartIsZero(lowest))
+        {
+            lowest++;
+        }
+
+        // a^m starts in degree m * lowest, so only m <= N / lowest contribute.
+        for (var m = 1; m * lowest <= MaxDegree; m++)
         {
             power = Multiply(power, this).Scale(new Rational(1, m));
             result.AddInPlace(power, Rational.One);

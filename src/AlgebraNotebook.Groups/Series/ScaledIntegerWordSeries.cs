@@ -67,6 +67,67 @@ internal sealed class ScaledIntegerWordSeries
         return result;
     }
 
+    /// <summary>
+    /// exp(c) (or exp(-c)) for c homogeneous of degree n given by its scaled part s(c)_n: the scaled parts are
+    /// s_(mn) = (mn)! / (m! (n!)^m) s(c)_n^m (concatenation power), an integer multiple of an integer array.
+    /// </summary>
+    public static ScaledIntegerWordSeries ExponentialOfHomogeneous(int k, int maxDegree, int n, Int128[] scaledPart, bool negate)
+    {
+        var result = Zero(k, maxDegree);
+        result.Parts[0][0] = 1;
+        var basis = negate ? Array.ConvertAll(scaledPart, v => checked(-v)) : scaledPart;
+        var nonZero = new List<(int Index, Int128 Value)>();
+        for (var i = 0; i < basis.Length; i++)
+        {
+            if (basis[i] != 0)
+            {
+                nonZero.Add((i, basis[i]));
+            }
+        }
+
+        var power = new Int128[] { 1 };
+        var shift = LieExpansion.IntPow(k, n);
+        for (var m = 1; m * n <= maxDegree; m++)
+        {
+            var next = new Int128[power.Length * shift];
+            checked
+            {
+                for (var i = 0; i < power.Length; i++)
+                {
+                    if (power[i] == 0)
+                    {
+                        continue;
+                    }
+
+                    foreach (var (j, v) in nonZero)
+                    {
+                        next[(i * shift) + j] = power[i] * v;
+                    }
+                }
+            }
+
+            power = next;
+
+            // (mn)! / (m! (n!)^m) = prod over r = 1..m of C(rn - 1, n - 1).
+            Int128 multiplier = 1;
+            for (var r = 1; r <= m; r++)
+            {
+                multiplier = checked(multiplier * Binomials[(r * n) - 1][n - 1]);
+            }
+
+            var target = result.Parts[m * n];
+            for (var i = 0; i < power.Length; i++)
+            {
+                if (power[i] != 0)
+                {
+                    target[i] = checked(multiplier * power[i]);
+                }
+            }
+        }
+
+        return result;
+    }
+
     /// <summary>The binomial product, truncated after degree N. Cost: (non-zeros of a) x (non-zeros of b) per degree pair.</summary>
     public static ScaledIntegerWordSeries Multiply(ScaledIntegerWordSeries a, ScaledIntegerWordSeries b)
     {

@@ -43,6 +43,15 @@ public static class Zassenhaus
         }
 
         (limits ?? SeriesLimits.Default).Check("Zassenhaus formula", algebra.Alphabet.Count, degree);
+        var ix = algebra.Alphabet.IndexOf(x);
+        var iy = algebra.Alphabet.IndexOf(y);
+        var exponents = TryComputeScaledInteger(algebra, ix, iy, degree) ?? ComputeRational(algebra, gx, gy, degree);
+        return new ZassenhausExponents(algebra, x, y, exponents);
+    }
+
+    /// <summary>The reference variant: rational dense series.</summary>
+    internal static List<LieSeries> ComputeRational(FreeLieAlgebra algebra, LieSeries gx, LieSeries gy, int degree)
+    {
         var k = algebra.Alphabet.Count;
         var remainder = DenseWordSeries.Multiply(
             DenseWordSeries.Multiply(
@@ -68,6 +77,65 @@ public static class Zassenhaus
             }
         }
 
-        return new ZassenhausExponents(algebra, x, y, exponents);
+        return exponents;
+    }
+
+    /// <summary>
+    /// The fast variant in the scaled integer representation s_n = n! x_n (<see cref="ScaledIntegerWordSeries"/>, D = 1):
+    /// s(R_2) is integral, so s(C_n) = n! C_n is integral, and exp(-C_n) has the integral scaled parts
+    /// s_(mn) = (mn)! / (m! (n!)^m) (-s(C_n))^m (the coefficient counts partitions of mn items into m blocks of n).
+    /// Null when a 128-bit value overflows.
+    /// </summary>
+    internal static List<LieSeries>? TryComputeScaledInteger(FreeLieAlgebra algebra, int x, int y, int degree)
+    {
+        var k = algebra.Alphabet.Count;
+        try
+        {
+            Int128[] Letters(int xCoefficient, int yCoefficient)
+            {
+                var letters = new Int128[k];
+                letters[x] += xCoefficient;
+                letters[y] += yCoefficient;
+                return letters;
+            }
+
+            var remainder = ScaledIntegerWordSeries.Multiply(
+                ScaledIntegerWordSeries.Multiply(
+                    ScaledIntegerWordSeries.ExponentialOfLinear(k, degree, Letters(0, -1)),
+                    ScaledIntegerWordSeries.ExponentialOfLinear(k, degree, Letters(-1, 0))),
+                ScaledIntegerWordSeries.ExponentialOfLinear(k, degree, Letters(1, 1)));
+
+            var exponents = new List<LieSeries>();
+            var expansions = new DenseExpansions(k);
+            var factorial = System.Numerics.BigInteger.One;
+            for (var n = 2; n <= degree; n++)
+            {
+                factorial *= n;
+                var scaledC = remainder.Parts[n];
+                var terms = new List<(LyndonWord Word, Rational Coefficient)>();
+                var verdict = LieExpansion.TryProjectInteger(k, n, (Int128[])scaledC.Clone(), factorial, terms, expansions);
+                if (verdict is null)
+                {
+                    return null;
+                }
+
+                if (!verdict.Value)
+                {
+                    throw new InvalidOperationException($"Internal error: the degree-{n} Zassenhaus remainder is not a Lie element.");
+                }
+
+                exponents.Add(new LieSeries(algebra, terms, int.MaxValue));
+                if (n < degree)
+                {
+                    remainder = ScaledIntegerWordSeries.Multiply(ScaledIntegerWordSeries.ExponentialOfHomogeneous(k, degree, n, scaledC, negate: true), remainder);
+                }
+            }
+
+            return exponents;
+        }
+        catch (OverflowException)
+        {
+            return null;
+        }
     }
 }

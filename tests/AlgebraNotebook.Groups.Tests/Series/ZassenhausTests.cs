@@ -48,6 +48,20 @@ public class ZassenhausTests
     }
 
     [Fact]
+    public void Scaled_integer_variant_agrees_with_the_rational_reference()
+    {
+        // The rational dense variant is the oracle for the scaled 128-bit integer variant (also with a third,
+        // unused generator and the generators given in the other order).
+        var xyz = new FreeLieAlgebra("X", "Y", "Z");
+        foreach (var (algebra, x, y) in new[] { (XY, "X", "Y"), (xyz, "Z", "X") })
+        {
+            var fast = Zassenhaus.TryComputeScaledInteger(algebra, algebra.Alphabet.IndexOf(x), algebra.Alphabet.IndexOf(y), 7);
+            Assert.NotNull(fast);
+            Assert.Equal(Zassenhaus.ComputeRational(algebra, algebra.Generator(x), algebra.Generator(y), 7), fast);
+        }
+    }
+
+    [Fact]
     public void Text_states_the_convention()
     {
         var text = Zassenhaus.Compute(3).ToString();
