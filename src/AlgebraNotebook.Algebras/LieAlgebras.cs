@@ -403,7 +403,11 @@ public static class LieAlgebras
 
     private static LieAlgebra<Rational> UnitaryCore(int p, int q, bool traceless)
     {
-        CheckSignature(p, q);
+        if (traceless)
+        {
+            CheckSignature(p, q);
+        }
+
         var n = p + q;
         var mats = new List<Matrix<GaussianRational>>();
         var names = new List<string>();
