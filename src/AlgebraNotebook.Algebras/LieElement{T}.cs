@@ -132,7 +132,8 @@ public sealed class LieElement<T> : IEquatable<LieElement<T>>
 
             if (s != "1")
             {
-                text.Append(IsAtomic(s) ? s : $"({s})").Append(' ');
+                // "2 i" prints as "2i"; a coefficient with an inner sign is parenthesised.
+                text.Append(IsAtomic(s) ? s.Replace(" ", string.Empty) : $"({s})").Append(' ');
             }
 
             text.Append(names[i]);
@@ -141,7 +142,7 @@ public sealed class LieElement<T> : IEquatable<LieElement<T>>
         return text.Length == 0 ? "0" : text.ToString();
     }
 
-    private static bool IsAtomic(string s) => s.IndexOfAny([' ', '+', '-']) < 0;
+    private static bool IsAtomic(string s) => s.IndexOfAny(['+', '-']) < 0;
 
     private static void Same(LieElement<T> left, LieElement<T> right)
     {
