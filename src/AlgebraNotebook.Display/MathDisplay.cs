@@ -11,8 +11,12 @@ namespace AlgebraNotebook.Display;
 /// </summary>
 /// <remarks>
 /// <para>Renderable out of the box: <see cref="Exact.Scalars.Rational"/>, <see cref="Exact.Scalars.GaussianRational"/>,
-/// <see cref="Exact.Symbols.Symbol"/>, <see cref="Exact.Polynomials.Monomial"/>, any <see cref="MathNode"/>, and
-/// the generic containers listed in <see cref="RegisterGeneric"/> whenever their type arguments are renderable.</para>
+/// <see cref="Exact.Symbols.Symbol"/>, <see cref="Exact.Polynomials.Monomial"/>, any <see cref="MathNode"/>, and the
+/// generic types <see cref="Exact.Polynomials.Polynomial{T}"/>, <see cref="Exact.Polynomials.QuotientElement{T}"/>
+/// (shown as its normal form), <see cref="Exact.Matrices.Matrix{T}"/>, <see cref="Exact.Matrices.UnivariatePolynomial{T}"/>
+/// (in its variable λ) and <see cref="Exact.Series.TruncatedSeries{T}"/> (terms by ascending total degree, then O(t^N)),
+/// whenever their type arguments are renderable. Entries and coefficients are converted recursively through the same
+/// registry, so Matrix&lt;Polynomial&lt;GaussianRational&gt;&gt; works with no extra code.</para>
 /// <para>Conventions: numbers are exact (integers and built-up fractions, sign in front); the imaginary unit is an
 /// upright i (ISO 80000-2), LaTeX <c>\mathrm{i}</c>; symbol names are typeset by <see cref="SymbolNames"/>; plain
 /// text keeps symbol names verbatim and writes products with "*" and powers with "^".</para>

@@ -6,7 +6,8 @@ namespace AlgebraNotebook.Display;
 /// <item>Greek names <c>alpha</c> ... <c>omega</c> and <c>Alpha</c> ... <c>Omega</c> become greek letters; capitals are
 /// upright. <c>epsilon</c>, <c>phi</c>, <c>theta</c> follow LaTeX (ϵ, ϕ, θ); <c>varepsilon</c>, <c>varphi</c>,
 /// <c>vartheta</c> give ε, φ, ϑ.</item>
-/// <item><c>hbar</c> becomes ℏ (LaTeX <c>\hbar</c>).</item>
+/// <item><c>hbar</c> becomes ℏ (LaTeX <c>\hbar</c>). A name that is the letter itself (<c>λ</c>, <c>ℏ</c>) is treated like
+/// its spelled-out name.</item>
 /// <item>An underscore starts a subscript: <c>J_x</c> is J with subscript x, <c>x_12</c> is x with subscript 12; the
 /// part after the first underscore follows the same convention again (<c>J_alpha</c> is J with subscript α).</item>
 /// <item>Otherwise trailing digits after a non-digit start form a numeric subscript: <c>t1</c> is t with subscript 1,
@@ -52,7 +53,7 @@ public static class SymbolNames
 
     /// <summary>
     /// Looks up the glyph for a base name: the Unicode character used in MathML, the LaTeX spelling, and whether
-    /// it is upright (greek capitals). False for names that are not greek letters or <c>hbar</c>.
+    /// it is upright (greek capitals). False for names that are not greek letters, <c>hbar</c>, or one of those glyphs.
     /// </summary>
     public static bool TryGetGlyph(string baseName, out string glyph, out string latex, out bool upright)
     {
@@ -103,6 +104,13 @@ public static class SymbolNames
         }
 
         table["hbar"] = ("ℏ", @"\hbar", false);
+
+        // A name may also be the letter itself ("λ"); it gets the same LaTeX spelling.
+        foreach (var entry in table.Values.ToArray())
+        {
+            table.TryAdd(entry.Item1, entry);
+        }
+
         return table;
     }
 }

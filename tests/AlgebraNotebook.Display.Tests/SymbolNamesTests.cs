@@ -30,14 +30,26 @@ public class SymbolNamesTests
     [InlineData("theta_1", "<msub><mi>θ</mi><mn>1</mn></msub>", @"\theta_{1}")]
     [InlineData("J_alpha", "<msub><mi>J</mi><mi>α</mi></msub>", @"J_{\alpha}")]
     [InlineData("mass", "<mi>mass</mi>", @"\mathrm{mass}")]
+    [InlineData("λ", "<mi>λ</mi>", @"\lambda")]
     public void Symbol_names_map_to_typeset_glyphs(string name, string mathmlBody, string latex)
     {
         // Greek letters and ℏ: Unicode code charts (Greek and Coptic U+0370-03FF; U+210F PLANCK CONSTANT OVER TWO PI)
-        // and the LaTeX symbol list (The Comprehensive LaTeX Symbol List, tables of greek letters); capitals upright: TeXbook ch. 16.
-        var symbol = Symbol.Of(name);
+        // and the LaTeX symbol list (The Comprehensive LaTeX Symbol List, tables of greek letters); capitals upright as in plain TeX: from memory.
+        // Identifier nodes go through the same naming convention as symbols.
+        var symbol = AlgebraNotebook.Display.Tree.MathNodes.Symbol(name);
         Assert.Equal($"<math display=\"block\" xmlns=\"http://www.w3.org/1998/Math/MathML\">{mathmlBody}</math>", MathDisplay.ToMathML(symbol));
         Assert.Equal(latex, MathDisplay.ToLatex(symbol));
         Assert.Equal(name, MathDisplay.ToPlainText(symbol));
+    }
+
+    [Fact]
+    public void Power_of_a_subscripted_name_stacks_the_exponent_over_the_subscript()
+    {
+        // x_1^2 sets both scripts on the base (common practice; MathML Core msubsup).
+        var power = AlgebraNotebook.Display.Tree.MathNodes.Power(AlgebraNotebook.Display.Tree.MathNodes.Symbol("omega12"), 2);
+        Assert.Contains("<msubsup><mi>ω</mi><mn>12</mn><mn>2</mn></msubsup>", MathDisplay.ToMathML(power));
+        Assert.Equal(@"\omega_{12}^{2}", MathDisplay.ToLatex(power));
+        Assert.Equal("omega12^2", MathDisplay.ToPlainText(power));
     }
 
     [Fact]
@@ -61,11 +73,11 @@ public class SymbolNamesTests
     [Fact]
     public void Monomial_shows_powers_and_juxtaposition()
     {
-        // x^2 y as msup and juxtaposition with invisible times U+2062 (W3C MathML Core, 3.2.5; Unicode U+2062).
-        var monomial = Monomial.FromFactors([(Symbol.Of("u"), 2), (Symbol.Of("v"), 1)]);
-        Assert.Equal("u^2*v", MathDisplay.ToPlainText(monomial));
-        Assert.Equal("u^{2} v", MathDisplay.ToLatex(monomial));
-        Assert.Contains("<msup><mi>u</mi><mn>2</mn></msup><mo>&#x2062;</mo><mi>v</mi>", MathDisplay.ToMathML(monomial));
+        // x^2 y as msup and juxtaposition with invisible times U+2062 (Unicode U+2062 INVISIBLE TIMES; common practice in MathML).
+        var monomial = Monomial.FromFactors([(Symbol.Of("ma"), 2), (Symbol.Of("mb"), 1)]);
+        Assert.Equal("ma^2*mb", MathDisplay.ToPlainText(monomial));
+        Assert.Equal(@"\mathrm{ma}^{2} \mathrm{mb}", MathDisplay.ToLatex(monomial));
+        Assert.Contains("<msup><mi>ma</mi><mn>2</mn></msup><mo>&#x2062;</mo><mi>mb</mi>", MathDisplay.ToMathML(monomial));
         Assert.Equal("1", MathDisplay.ToPlainText(Monomial.One));
     }
 }

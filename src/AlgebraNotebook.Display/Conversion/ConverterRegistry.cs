@@ -2,8 +2,10 @@ using System.Collections.Concurrent;
 using System.Reflection;
 using AlgebraNotebook.Display.Tree;
 using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.Exact.Series;
 using AlgebraNotebook.Exact.Symbols;
 
 namespace AlgebraNotebook.Display.Conversion;
@@ -27,7 +29,16 @@ internal static class ConverterRegistry
         AddExact<GaussianRational>(ScalarConverters.FromGaussianRational);
         AddExact<Symbol>(PolynomialConverters.FromSymbol);
         AddExact<Monomial>(PolynomialConverters.FromMonomial);
+        AddGeneric(typeof(Polynomial<>), Method(typeof(PolynomialConverters), nameof(PolynomialConverters.FromPolynomial)));
+        AddGeneric(typeof(QuotientElement<>), Method(typeof(PolynomialConverters), nameof(PolynomialConverters.FromQuotientElement)));
+        AddGeneric(typeof(Matrix<>), Method(typeof(MatrixConverters), nameof(MatrixConverters.FromMatrix)));
+        AddGeneric(typeof(UnivariatePolynomial<>), Method(typeof(MatrixConverters), nameof(MatrixConverters.FromUnivariatePolynomial)));
+        AddGeneric(typeof(TruncatedSeries<>), Method(typeof(SeriesConverters), nameof(SeriesConverters.FromTruncatedSeries)));
     }
+
+    private static MethodInfo Method(Type host, string name) =>
+        host.GetMethod(name, BindingFlags.Public | BindingFlags.Static)
+        ?? throw new InvalidOperationException($"Built-in display converter {host.Name}.{name} is missing.");
 
     public static void AddExact<TObject>(Func<TObject, MathNode> converter)
     {

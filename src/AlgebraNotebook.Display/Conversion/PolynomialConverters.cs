@@ -1,10 +1,11 @@
 using AlgebraNotebook.Display.Tree;
 using AlgebraNotebook.Exact.Polynomials;
+using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Symbols;
 
 namespace AlgebraNotebook.Display.Conversion;
 
-/// <summary>Display trees for symbols, monomials and linear combinations of monomials (written once for every coefficient type).</summary>
+/// <summary>Display trees for symbols, monomials, polynomials and quotient-ring elements (written once for every coefficient type).</summary>
 internal static class PolynomialConverters
 {
     /// <summary>A symbol as an identifier (typeset by <see cref="SymbolNames"/>).</summary>
@@ -26,6 +27,14 @@ internal static class PolynomialConverters
 
         return MathNodes.Product(factors);
     }
+
+    /// <summary>A polynomial as the sum of its terms in the order of <see cref="Polynomial{T}.Terms"/> (descending in the default monomial order).</summary>
+    public static MathNode FromPolynomial<T>(Polynomial<T> polynomial)
+        where T : IFieldElement<T> => LinearCombination(polynomial.Terms);
+
+    /// <summary>An element of a quotient ring as its normal-form representative.</summary>
+    public static MathNode FromQuotientElement<T>(QuotientElement<T> element)
+        where T : IFieldElement<T> => LinearCombination(element.Representative.Terms);
 
     /// <summary>
     /// The sum of coefficient times monomial over <paramref name="terms"/> in the given order. Each coefficient is

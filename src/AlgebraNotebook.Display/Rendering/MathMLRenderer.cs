@@ -53,6 +53,18 @@ internal sealed class MathMLRenderer
                 Write(fraction.Denominator);
                 _out.Append("</mfrac>");
                 break;
+            case PowerNode { Base: SubscriptNode subscripted } power:
+                // Superscript stacked over the subscript, as TeX sets x_1^2.
+                _out.Append("<msubsup>");
+                Write(subscripted.Base);
+                Write(subscripted.Index);
+                Write(power.Exponent);
+                _out.Append("</msubsup>");
+                break;
+            case PowerNode { Base: IdentifierNode { Style: IdentifierStyle.Symbol } identifier } power
+                when SymbolNames.Split(identifier.Name).Subscript is not null:
+                WriteSymbolName(identifier.Name, power.Exponent);
+                break;
             case PowerNode power:
                 _out.Append("<msup>");
                 Write(power.Base);
@@ -170,7 +182,8 @@ internal sealed class MathMLRenderer
         _out.Append("</mo>");
     }
 
-    private void WriteSymbolName(string name)
+    /// <summary>Writes a symbol name by the <see cref="SymbolNames"/> convention, with an optional superscript stacked over its subscript.</summary>
+    private void WriteSymbolName(string name, MathNode? superscript = null)
     {
         var (baseName, subscript) = SymbolNames.Split(name);
         if (subscript is null)
@@ -179,7 +192,7 @@ internal sealed class MathMLRenderer
             return;
         }
 
-        _out.Append("<msub>");
+        _out.Append(superscript is null ? "<msub>" : "<msubsup>");
         WriteSymbolBase(baseName);
         if (subscript.All(char.IsAsciiDigit))
         {
@@ -190,7 +203,15 @@ internal sealed class MathMLRenderer
             WriteSymbolName(subscript);
         }
 
-        _out.Append("</msub>");
+        if (superscript is null)
+        {
+            _out.Append("</msub>");
+        }
+        else
+        {
+            Write(superscript);
+            _out.Append("</msubsup>");
+        }
     }
 
     private void WriteSymbolBase(string baseName)

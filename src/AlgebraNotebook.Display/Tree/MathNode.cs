@@ -1,3 +1,5 @@
+using AlgebraNotebook.Display.Rendering;
+
 namespace AlgebraNotebook.Display.Tree;
 
 /// <summary>
@@ -22,4 +24,7 @@ public abstract record MathNode
     /// tall content stretch, fences around short content are marked non-stretchy.
     /// </summary>
     public abstract bool IsTall { get; }
+
+    /// <summary>The plain-text rendering of this tree (the same as <see cref="MathDisplay.ToPlainText"/>).</summary>
+    public sealed override string ToString() => PlainTextRenderer.Render(this);
 }

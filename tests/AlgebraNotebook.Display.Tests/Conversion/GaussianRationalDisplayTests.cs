@@ -7,7 +7,7 @@ public class GaussianRationalDisplayTests
     [Fact]
     public void Half_minus_three_fifths_i_matches_approved_outputs()
     {
-        // Upright imaginary unit after its coefficient: ISO 80000-2:2019, item 2-14.1 (i set in roman type).
+        // Upright imaginary unit after its coefficient: ISO 80000-2, complex numbers (i set in roman type); from memory.
         Approvals.VerifyAllFormats("GaussianRational_half_minus_three_fifths_i", GaussianRational.Parse("1/2 - 3/5 i"));
     }
 
@@ -31,7 +31,7 @@ public class GaussianRationalDisplayTests
     [Fact]
     public void Imaginary_unit_is_upright_in_mathml()
     {
-        // MathML Core: mathvariant="normal" is the only supported value and makes a single-letter <mi> upright (W3C MathML Core, 3.2.3.3).
+        // MathML Core: mathvariant="normal" is the only supported value and makes a single-letter <mi> upright (W3C MathML Core, the mathvariant attribute; from memory).
         Assert.Contains("<mi mathvariant=\"normal\">i</mi>", MathDisplay.ToMathML(GaussianRational.I));
     }
 }

@@ -7,7 +7,7 @@ public class RationalDisplayTests
     [Fact]
     public void Negative_fraction_matches_approved_outputs()
     {
-        // Sign in front of a built-up fraction: common practice (TeXbook ch. 17, \frac with a leading minus).
+        // Sign in front of a built-up fraction: common practice.
         Approvals.VerifyAllFormats("Rational_negative_fraction", Rational.Parse("-3/4"));
     }
 
@@ -29,7 +29,7 @@ public class RationalDisplayTests
     [Fact]
     public void Negative_integer_is_a_minus_operator_and_a_non_negative_number()
     {
-        // MathML Core: a minus sign is an <mo> (U+2212) and <mn> holds the unsigned digits (W3C MathML Core, 3.2.3).
+        // MathML Core: a minus sign is an <mo> (U+2212) and <mn> holds the unsigned digits (W3C MathML Core token elements; from memory).
         var mathml = MathDisplay.ToMathML(Rational.Parse("-12"));
         Assert.Contains("<mo>\u2212</mo><mn>12</mn>", mathml);
         Assert.DoesNotContain("<mn>-", mathml);
@@ -38,7 +38,7 @@ public class RationalDisplayTests
     [Fact]
     public void Huge_rational_is_printed_in_full()
     {
-        // 2^200 = 1606938044258990275541962092341162602522202993782792835301376 (from memory, checked by BigInteger.Pow below).
+        // Exact numbers are printed with every digit, never abbreviated or rounded: common practice.
         var big = System.Numerics.BigInteger.Pow(2, 200);
         var value = new Rational(big, 3);
         Assert.Equal($"{big}/3", MathDisplay.ToPlainText(value));

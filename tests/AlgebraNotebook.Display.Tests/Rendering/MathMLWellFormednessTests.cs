@@ -22,6 +22,7 @@ public class MathMLWellFormednessTests
             { "nested", MathNodes.Power(MathNodes.Sum(x, half), MathNodes.Fraction(x, MathNodes.Symbol("J_alpha"))) },
             { "order term", MathNodes.Sum(MathNodes.One, x, new BigONode(MathNodes.Power(x, 3))) },
             { "subscript", new SubscriptNode(MathNodes.Symbol("e"), MathNodes.Sum(MathNodes.Symbol("i"), MathNodes.One)) },
+            { "power of subscripted names", MathNodes.Product(MathNodes.Power(MathNodes.Symbol("omega12"), 2), MathNodes.Power(new SubscriptNode(MathNodes.Symbol("e"), MathNodes.Integer(3)), 2)) },
         };
     }
 
@@ -29,7 +30,7 @@ public class MathMLWellFormednessTests
     [MemberData(nameof(Samples))]
     public void MathML_parses_as_xml_with_a_math_root_in_the_MathML_namespace(string description, object value)
     {
-        // The root element and namespace required by MathML: W3C MathML Core, section 2.1 (the top-level <math> element).
+        // The root element and namespace required by MathML: W3C MathML Core, the top-level <math> element (from memory).
         var mathml = MathDisplay.ToMathML(value);
         XDocument document;
         try
@@ -50,11 +51,12 @@ public class MathMLWellFormednessTests
     [MemberData(nameof(Samples))]
     public void Script_and_fraction_elements_have_exactly_two_children(string description, object value)
     {
-        // mfrac, msup and msub take exactly two children: W3C MathML Core, sections 3.3.2 and 3.4.1.
+        // mfrac, msup and msub take exactly two children, msubsup three: W3C MathML Core (from memory).
         var document = XDocument.Parse(MathDisplay.ToMathML(value));
-        foreach (var element in document.Descendants().Where(e => e.Name.LocalName is "mfrac" or "msup" or "msub"))
+        foreach (var element in document.Descendants().Where(e => e.Name.LocalName is "mfrac" or "msup" or "msub" or "msubsup"))
         {
-            Assert.True(element.Elements().Count() == 2, $"{description}: <{element.Name.LocalName}> has {element.Elements().Count()} children: {element}");
+            var expected = element.Name.LocalName == "msubsup" ? 3 : 2;
+            Assert.True(element.Elements().Count() == expected, $"{description}: <{element.Name.LocalName}> has {element.Elements().Count()} children: {element}");
         }
     }
 
@@ -78,7 +80,7 @@ public class MathMLWellFormednessTests
     [Fact]
     public void Markup_characters_in_text_are_escaped_in_LaTeX()
     {
-        // LaTeX special characters # $ % & _ { } \ ^ ~ (Lamport, LaTeX: A Document Preparation System, 2nd ed., section 2.2.1).
+        // LaTeX special characters # $ % & _ { } \ ^ ~ (Lamport, LaTeX: A Document Preparation System, 2nd ed., special characters; from memory).
         var latex = MathDisplay.ToLatex(MathNodes.Text(@"50% of {a_b} & #1 \ $"));
         Assert.Equal(@"\text{50\% of \{a\_b\} \& \#1 \textbackslash{} \$}", latex);
     }

@@ -52,7 +52,7 @@ public class MathNodesTests
     [Fact]
     public void Fences_stretch_only_around_tall_content()
     {
-        // MathML Core operator stretching (W3C MathML Core, 3.2.4.3): stretchy stated explicitly on each fence.
+        // MathML Core operator stretching (W3C MathML Core, operator stretching; from memory): stretchy stated explicitly on each fence.
         var shortFence = MathNodes.Fenced(MathNodes.Sum(X, Y));
         var tallFence = MathNodes.Fenced(MathNodes.Sum(X, MathNodes.Fraction(MathNodes.One, MathNodes.Integer(2))));
         Assert.Contains("<mo stretchy=\"false\">(</mo>", MathDisplay.ToMathML(shortFence));

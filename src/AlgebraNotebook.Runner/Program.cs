@@ -1,0 +1,3 @@
+using AlgebraNotebook.Runner;
+
+return await RunnerApp.RunAsync(args, Console.Out, Console.Error);
