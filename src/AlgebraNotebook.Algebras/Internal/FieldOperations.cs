@@ -27,3 +27,16 @@ internal static class FieldOperations<T>
 
     public static string FieldName => typeof(T) == typeof(Rational) ? "Q" : typeof(T) == typeof(GaussianRational) ? "Q(i)" : typeof(T).Name;
 }
+
+/// <summary>Conversions between a field and the rationals inside it.</summary>
+internal static class RationalPart<T>
+    where T : IFieldElement<T>
+{
+    /// <summary>The value as a rational, or null when it is not rational (a Gaussian rational with non-zero imaginary part).</summary>
+    public static Rational? TryToRational(T value) => value switch
+    {
+        Rational r => r,
+        GaussianRational g when g.IsReal => g.Real,
+        _ => null,
+    };
+}
