@@ -45,7 +45,8 @@ public sealed partial class LieAlgebra<T>
     /// <summary>
     /// The solvable radical (largest solvable ideal), computed as the Killing-orthogonal complement of [g, g]:
     /// in characteristic 0, Rad(g) = [g, g]^⊥ for the Killing form (Bourbaki, Lie Groups and Lie Algebras, Ch. I §5 no. 5,
-    /// Prop. 5; de Graaf, Lie Algebras: Theory and Algorithms, §2.? — cited from memory; the tests check that the result
+    /// Prop. 5, cited from memory; the same characterisation drives the radical algorithm in de Graaf, Lie Algebras: Theory and
+    /// Algorithms, chapter on the solvable radical, also from memory; the tests check that the result
     /// is a solvable ideal with semisimple quotient). Cost: one Killing form and one linear system.
     /// </summary>
     public IReadOnlyList<LieElement<T>> SolvableRadical() => ToElements(RadicalCore());

@@ -2,6 +2,7 @@ using AlgebraNotebook.Algebras.Internal;
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.Roots;
 
 namespace AlgebraNotebook.Algebras;
 
@@ -124,6 +125,173 @@ public static class RealLieAlgebras
         var restricted = Matrix<Rational>.FromFunction(derived.Length, derived.Length,
             (a, b) => LieAlgebra<Rational>.Bilinear(k, derived[a], derived[b]));
         return SymmetricForms.Signature(restricted).IsNegativeDefinite;
+    }
+
+    /// <summary>
+    /// Names a real SIMPLE Lie algebra. Method: the Cartan type X of the complexification (from
+    /// <see cref="LieAlgebra{T}.RootDecomposition"/> over Q(i)) and the dimension of a maximal compact subalgebra, which is
+    /// the number of negative squares of the Killing form (Cartan decomposition g = k ⊕ p, K negative on k and positive
+    /// on p). These are compared with the list of real forms of each complex simple algebra and the dimensions of their
+    /// maximal compact subalgebras (Helgason, Differential Geometry, Lie Groups, and Symmetric Spaces, ch. X, Table V,
+    /// from memory): A_(n-1): su(p,q) (k = p^2 + q^2 - 1), sl(n,R) (n(n-1)/2), su*(n) (n even, (n/2)(n+1));
+    /// B_r, D_r: so(p,q) (p(p-1)/2 + q(q-1)/2), so*(2r) (r^2); C_r: sp(2r,R) (r^2), sp(p,q) (p(2p+1) + q(2q+1));
+    /// exceptional forms by their character, e.g. E6(6), E6(2), E6(-14), E6(-26). Low-rank coincidences list every name
+    /// (A1 = B1 = C1, B2 = C2, A3 = D3). When the complexification has two equal simple components X + X the algebra is
+    /// the complex simple algebra of type X viewed as real, named e.g. "sl(2,C) as a real algebra".
+    /// </summary>
+    /// <exception cref="ExactArgumentException">The algebra is not simple over the reals.</exception>
+    /// <exception cref="BeyondCapabilityException">The complexification is not split over Q(i) with the Cartan subalgebra
+    /// found, or no listed real form fits (both would indicate a limit of the search, the message says which).</exception>
+    public static RealFormIdentification IdentifyRealForm(this LieAlgebra<Rational> algebra)
+    {
+        ArgumentNullException.ThrowIfNull(algebra);
+        if (!algebra.IsSimple)
+        {
+            throw new ExactArgumentException(
+                $"{algebra.Label} is not a simple real Lie algebra; identify its simple ideals (SimpleIdeals, LeviDecomposition) one by one.", nameof(algebra));
+        }
+
+        var signature = algebra.KillingSignature();
+        var roots = algebra.Complexify().RootDecomposition();
+        if (!roots.IsSplit || roots.Type is null)
+        {
+            throw new BeyondCapabilityException($"The complexification of {algebra.Label} could not be split over Q(i): {roots.Note}");
+        }
+
+        var type = roots.Type;
+        var k = signature.Negative;
+        List<string> candidates;
+        if (type.Components.Count == 2)
+        {
+            var x = type.Components[0];
+            candidates = k == Roots.RootSystem.Of(CartanType.Of(x)).Dimension ? [$"{ComplexName(x)} as a real algebra"] : [];
+        }
+        else
+        {
+            var x = type.Components[0];
+            candidates = RealForms(x.Family, x.Rank).Where(f => f.Compact == k).Select(f => f.Name).Distinct().ToList();
+        }
+
+        if (candidates.Count == 0)
+        {
+            throw new BeyondCapabilityException(
+                $"No listed real form of {type} has a maximal compact subalgebra of dimension {k} (Killing signature {signature}).");
+        }
+
+        return new RealFormIdentification(string.Join(" or ", candidates), candidates, type, signature);
+    }
+
+    private static string ComplexName(SimpleCartanType x) => x.Family switch
+    {
+        CartanFamily.A => $"sl({x.Rank + 1},C)",
+        CartanFamily.B => $"so({2 * x.Rank + 1},C)",
+        CartanFamily.C => $"sp({2 * x.Rank},C)",
+        CartanFamily.D => $"so({2 * x.Rank},C)",
+        _ => $"{x.Name}(C)",
+    };
+
+    private static IEnumerable<(string Name, int Compact)> RealForms(CartanFamily family, int rank, bool withCoincidences = true)
+    {
+        switch (family)
+        {
+            case CartanFamily.A:
+                var n = rank + 1;
+                for (var q = 0; 2 * q <= n; q++)
+                {
+                    var p = n - q;
+                    yield return (q == 0 ? $"su({n})" : $"su({p},{q})", p * p + q * q - 1);
+                }
+
+                yield return ($"sl({n},R)", n * (n - 1) / 2);
+                if (n % 2 == 0 && n >= 4)
+                {
+                    yield return ($"su*({n})", n / 2 * (n + 1));
+                }
+
+                if (rank == 1 && withCoincidences)
+                {
+                    foreach (var f in RealForms(CartanFamily.B, 1, false).Concat(RealForms(CartanFamily.C, 1, false)))
+                    {
+                        yield return f;
+                    }
+                }
+
+                if (rank == 3 && withCoincidences)
+                {
+                    foreach (var f in RealForms(CartanFamily.D, 3, false))
+                    {
+                        yield return f;
+                    }
+                }
+
+                break;
+            case CartanFamily.B or CartanFamily.D:
+                var m = family == CartanFamily.B ? 2 * rank + 1 : 2 * rank;
+                for (var q = 0; 2 * q <= m; q++)
+                {
+                    var p = m - q;
+                    yield return (q == 0 ? $"so({m})" : $"so({p},{q})", p * (p - 1) / 2 + q * (q - 1) / 2);
+                }
+
+                if (family == CartanFamily.D)
+                {
+                    yield return ($"so*({m})", rank * rank);
+                }
+
+                if (family == CartanFamily.B && rank == 2 && withCoincidences)
+                {
+                    foreach (var f in RealForms(CartanFamily.C, 2, false))
+                    {
+                        yield return f;
+                    }
+                }
+
+                break;
+            case CartanFamily.C:
+                yield return ($"sp({2 * rank},R)", rank * rank);
+                for (var q = 0; 2 * q <= rank; q++)
+                {
+                    var p = rank - q;
+                    yield return (q == 0 ? $"sp({rank})" : $"sp({p},{q})", p * (2 * p + 1) + q * (2 * q + 1));
+                }
+
+                if (rank == 2 && withCoincidences)
+                {
+                    foreach (var f in RealForms(CartanFamily.B, 2, false))
+                    {
+                        yield return f;
+                    }
+                }
+
+                break;
+            case CartanFamily.G:
+                yield return ("G2 (compact)", 14);
+                yield return ("G2(2) (split)", 6);
+                break;
+            case CartanFamily.F:
+                yield return ("F4 (compact)", 52);
+                yield return ("F4(4) (split)", 24);
+                yield return ("F4(-20)", 36);
+                break;
+            case CartanFamily.E when rank == 6:
+                yield return ("E6 (compact)", 78);
+                yield return ("E6(6) (split)", 36);
+                yield return ("E6(2)", 38);
+                yield return ("E6(-14)", 46);
+                yield return ("E6(-26)", 52);
+                break;
+            case CartanFamily.E when rank == 7:
+                yield return ("E7 (compact)", 133);
+                yield return ("E7(7) (split)", 63);
+                yield return ("E7(-5)", 69);
+                yield return ("E7(-25)", 79);
+                break;
+            case CartanFamily.E:
+                yield return ("E8 (compact)", 248);
+                yield return ("E8(8) (split)", 120);
+                yield return ("E8(-24)", 136);
+                break;
+        }
     }
 
     private static Rational[] RealParts(Matrix<GaussianRational> m)
