@@ -14,7 +14,7 @@ public sealed partial class LieAlgebra<T>
     /// subalgebras are found for the usual bases: (1) the basis elements whose ad is diagonalisable over the field are
     /// collected, a maximal commuting set is chosen greedily, and the Fitting null component of ad x is taken for a
     /// random combination x of that set; (2) otherwise the Fitting null component of ad x for random elements x
-    /// (de Graaf, Lie Algebras: Theory and Algorithms, §3.2, from memory: for regular x it is a Cartan subalgebra).
+    /// (for regular x it is a Cartan subalgebra: Humphreys §15.3 and de Graaf, chapter on Cartan subalgebras, both from memory).
     /// Each candidate is verified (nilpotent and equal to its normalizer) before it is returned; random choices use a fixed seed.
     /// </summary>
     /// <exception cref="BeyondCapabilityException">No verified Cartan subalgebra was found within the attempts (the message says how many).</exception>

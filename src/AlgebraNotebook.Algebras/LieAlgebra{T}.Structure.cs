@@ -76,7 +76,7 @@ public sealed partial class LieAlgebra<T>
 
     /// <summary>
     /// A Levi decomposition: the solvable radical r and a semisimple subalgebra s complementary to it. Algorithm (after
-    /// de Graaf, Lie Algebras: Theory and Algorithms, §4.13, from memory): start from the complement of r spanned by the
+    /// de Graaf, Lie Algebras: Theory and Algorithms, chapter on the Levi decomposition, from memory): start from the complement of r spanned by the
     /// standard basis vectors not in r (first ones first), then correct it step by step along the derived series
     /// r ⊇ [r, r] ⊇ ..., each step one linear system whose solvability is Whitehead's first lemma. The result is
     /// verified to be a subalgebra before it is returned.

@@ -186,4 +186,29 @@ public class StructureTests
             Assert.Equal(g.Dimension, radical.Count + levi.Count);
         }
     }
+
+    [Fact]
+    public void Levi_correction_works_through_two_levels_of_the_derived_series_of_the_radical()
+    {
+        // Galilei radical span{K, P, H} has derived series R ⊃ span{P} ⊃ 0. Twist the rotations by radical elements so
+        // the naive complement fails at both levels; the computed factor must still be a complementary subalgebra ≅ so(3).
+        var g = LieAlgebras.Galilei<Rational>();
+        var twisted = new[] { "J_1", "J_2", "J_3" }
+            .Select((n, a) => g.Basis(n) + g.Basis($"K_{(a + 1) % 3 + 1}") + Samples.R(a + 1) * g.Basis("H") + g.Basis($"P_{a + 1}"))
+            .Concat(new[] { "K_1", "K_2", "K_3", "P_1", "P_2", "P_3", "H" }.Select(g.Basis)).ToList();
+        var h = g.Subalgebra(twisted, ["A1", "A2", "A3", "B1", "B2", "B3", "C1", "C2", "C3", "T"]);
+        Assert.False(h.IsSubalgebra([h.Basis("A1"), h.Basis("A2"), h.Basis("A3")]));
+        var levi = h.LeviDecomposition();
+        Assert.True(h.IsSubalgebra(levi.LeviFactor));
+        Assert.Equal(h.Dimension, h.Span(levi.LeviFactor.Concat(levi.Radical)).Count);
+        Assert.Equal(new FormSignature(0, 3, 0), h.Subalgebra(levi.LeviFactor).KillingSignature());
+    }
+
+    [Fact]
+    public void Algebra_text_lists_the_non_zero_brackets()
+    {
+        Assert.Equal(
+            "Lie algebra of dimension 3 from a bracket table, dimension 3, basis H, E, F\n[H, E] = 2 E\n[H, F] = -2 F\n[E, F] = H",
+            Samples.Sl2().ToString());
+    }
 }
