@@ -374,29 +374,51 @@ public sealed partial class LieAlgebra<T>
         return CreateTrusted(names, c, [], $"subalgebra of {Label}");
     }
 
-    /// <summary>A basis of the centroid {φ : φ ad(e_i) = ad(e_i) φ for all i}, as matrices.</summary>
+    /// <summary>
+    /// A basis of the centroid {φ : φ ad(e_i) = ad(e_i) φ for all i}, as matrices. The conditions are imposed one basis
+    /// element at a time, each time solving only inside the current solution space, which shrinks quickly.
+    /// </summary>
     internal List<Matrix<T>> CentroidCore()
     {
         var n = Dimension;
         var ad = AdjointMatrices();
-        var domain = Enumerable.Range(0, n * n).Select(i => Vectors<T>.Unit(n * n, i)).ToArray();
-        var images = domain.Select(v =>
+        var basis = Enumerable.Range(0, n * n)
+            .Select(i => Matrix<T>.FromFunction(n, n, (r, c) => r * n + c == i ? T.One : T.Zero))
+            .ToList();
+        foreach (var a in ad)
         {
-            var phi = Matrix<T>.FromFunction(n, n, (r, c) => v[r * n + c]);
-            return Concat(ad.Select(a => Flatten(phi * a - a * phi)));
-        }).ToArray();
-        var equations = new T[images[0].Length][];
-        for (var r = 0; r < equations.Length; r++)
-        {
-            equations[r] = new T[domain.Length];
-            for (var a = 0; a < domain.Length; a++)
+            if (basis.Count == 0)
             {
-                equations[r][a] = images[a][r];
+                break;
             }
+
+            var images = basis.Select(phi => Flatten(phi * a - a * phi)).ToArray();
+            var equations = new T[images[0].Length][];
+            for (var r = 0; r < equations.Length; r++)
+            {
+                equations[r] = new T[basis.Count];
+                for (var b = 0; b < basis.Count; b++)
+                {
+                    equations[r][b] = images[b][r];
+                }
+            }
+
+            var solutions = Vectors<T>.NullSpace(equations, basis.Count);
+            basis = solutions.Select(t =>
+            {
+                var m = Matrix<T>.Zero(n, n);
+                for (var b = 0; b < t.Length; b++)
+                {
+                    if (!t[b].IsZero)
+                    {
+                        m += t[b] * basis[b];
+                    }
+                }
+
+                return m;
+            }).ToList();
         }
 
-        return Vectors<T>.NullSpace(equations, n * n)
-            .Select(v => Matrix<T>.FromFunction(n, n, (r, c) => v[r * n + c]))
-            .ToList();
+        return basis;
     }
 }
