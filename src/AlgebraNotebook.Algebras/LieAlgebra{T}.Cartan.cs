@@ -165,7 +165,9 @@ public sealed partial class LieAlgebra<T>
         return new RootDecomposition<T>(hElements, true, $"split over {FieldOperations<T>.FieldName}: type {type}, {roots.Count} roots", ordered, simpleSpaces, cartanMatrix, type);
     }
 
-    private T[][] CartanCore()
+    private T[][] CartanCore() => _cartan.Value;
+
+    private T[][] ComputeCartanSubalgebra()
     {
         var random = new Random(1234);
         var diagonalisable = new List<T[]>();

@@ -370,7 +370,7 @@ public sealed partial class LieAlgebra<T>
             }
         }
 
-        var names = basis.Select(FormatVector).Select((s, i) => $"y_{i + 1}").ToArray();
+        var names = Enumerable.Range(1, d).Select(i => $"y_{i}").ToArray();
         return CreateTrusted(names, c, [], $"subalgebra of {Label}");
     }
 

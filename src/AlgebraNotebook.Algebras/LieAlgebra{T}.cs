@@ -28,6 +28,7 @@ public sealed partial class LieAlgebra<T>
     private readonly string[] _warnings;
     private readonly Lazy<Exact.Matrices.Matrix<T>[]> _adjoint;
     private readonly Lazy<Exact.Matrices.Matrix<T>> _killing;
+    private readonly Lazy<T[][]> _cartan;
 
     private LieAlgebra(string[] names, T[] constants, string[] warnings, string label)
     {
@@ -37,6 +38,7 @@ public sealed partial class LieAlgebra<T>
         Label = label;
         _adjoint = new Lazy<Exact.Matrices.Matrix<T>[]>(ComputeAdjointMatrices);
         _killing = new Lazy<Exact.Matrices.Matrix<T>>(ComputeKillingForm);
+        _cartan = new Lazy<T[][]>(ComputeCartanSubalgebra);
     }
 
     /// <summary>The dimension (number of basis elements).</summary>
