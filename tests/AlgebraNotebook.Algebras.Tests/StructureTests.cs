@@ -211,4 +211,30 @@ public class StructureTests
             "Lie algebra of dimension 3 from a bracket table, dimension 3, basis H, E, F\n[H, E] = 2 E\n[H, F] = -2 F\n[E, F] = H",
             Samples.Sl2().ToString());
     }
+
+    [Fact]
+    public void Derived_series_of_upper_triangular_3x3_matrices_has_dimensions_6_3_1_0()
+    {
+        // Common practice (Humphreys §3.1 example t(n), from memory): [t, t] = strictly upper n(3), [n, n] = span{E_13}.
+        var units = new List<Exact.Matrices.Matrix<GaussianRational>>();
+        var names = new List<string>();
+        for (var i = 0; i < 3; i++)
+        {
+            for (var j = i; j < 3; j++)
+            {
+                var (r, c) = (i, j);
+                units.Add(Exact.Matrices.Matrix<GaussianRational>.FromFunction(3, 3, (a, b) => a == r && b == c ? GaussianRational.One : GaussianRational.Zero));
+                names.Add($"E_{i + 1}{j + 1}");
+            }
+        }
+
+        var t = LieAlgebra<GaussianRational>.FromMatrices(units, names);
+        Assert.Equal([6, 3, 1, 0], t.DerivedSeries().Select(s => s.Count));
+        Assert.Equal([t.Basis("E_13")], t.DerivedSeries()[2]);
+        Assert.True(t.IsSolvable);
+        Assert.False(t.IsNilpotent);
+        // Nilradical: strictly upper triangular matrices plus the central scalar matrices (ad I = 0), dimension 4.
+        var identity = t.Basis("E_11") + t.Basis("E_22") + t.Basis("E_33");
+        Assert.Equal(t.Span(new[] { "E_12", "E_13", "E_23" }.Select(t.Basis).Append(identity)), t.Nilradical());
+    }
 }
