@@ -1,5 +1,6 @@
 using System.Collections.Concurrent;
 using System.Reflection;
+using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Display.Lie;
 using AlgebraNotebook.Display.Tree;
 using AlgebraNotebook.Exact;
@@ -8,6 +9,8 @@ using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Series;
 using AlgebraNotebook.Exact.Symbols;
+using AlgebraNotebook.Groups.FreeLie;
+using AlgebraNotebook.Groups.Series;
 using AlgebraNotebook.Roots;
 
 namespace AlgebraNotebook.Display.Conversion;
@@ -37,11 +40,19 @@ internal static class ConverterRegistry
         AddGeneric(typeof(UnivariatePolynomial<>), Method(typeof(MatrixConverters), nameof(MatrixConverters.FromUnivariatePolynomial)));
         AddGeneric(typeof(TruncatedSeries<>), Method(typeof(SeriesConverters), nameof(SeriesConverters.FromTruncatedSeries)));
 
+        // Algebras layer (converters in Display/Lie).
+        AddGeneric(typeof(LieElement<>), Method(typeof(LieConverters), nameof(LieConverters.FromLieElement)));
+
         // Roots layer (converters in Display/Lie).
         AddExact<Weight>(WeightDisplay.ToTree);
         AddExact<Root>(RootDisplay.ToTree);
         AddExact<SimpleCartanType>(CartanTypeDisplay.ToTree);
         AddExact<CartanType>(CartanTypeDisplay.ToTree);
+
+        // Groups layer: free Lie algebra, BCH and Zassenhaus series (converters in Display/Lie).
+        AddExact<LieSeries>(LieDisplay.FromLieSeries);
+        AddExact<BracketTree>(LieDisplay.FromBracketTree);
+        AddExact<ZassenhausExponents>(LieDisplay.FromZassenhaus);
     }
 
     private static MethodInfo Method(Type host, string name) =>
