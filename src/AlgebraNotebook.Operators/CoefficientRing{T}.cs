@@ -13,7 +13,7 @@ namespace AlgebraNotebook.Operators;
 /// coordinate x. Every coefficient has a canonical form (its normal form modulo the Groebner basis of the relations,
 /// graded reverse lexicographic order with symbols ranked by name), and every partial derivative of a coefficient is
 /// again a coefficient: d/dx acts on symbols as declared and on products by the Leibniz rule (chain rule through
-/// polynomials). Build one with <see cref="CoefficientRingBuilder{T}"/> or take a ready one from CoordinateSystems.
+/// polynomials). Build one with <see cref="CoefficientRingBuilder{T}"/> or take a ready one from <see cref="CoordinateSystems"/>.
 /// </summary>
 /// <remarks>
 /// <para>Well-definedness is checked when the ring is built: the derivative of every relation reduces to zero
@@ -23,7 +23,7 @@ namespace AlgebraNotebook.Operators;
 /// <para>Complex conjugation (used by formal adjoints) treats coordinates, parameters and functions as real unless a
 /// conjugate pair was declared; conjugation is checked to respect relations and derivatives.</para>
 /// <para>Two rings are different objects even when declared alike; operators and coefficients over different rings
-/// never mix without a CoordinateChange.</para>
+/// never mix without a <see cref="CoordinateChange{T}"/>.</para>
 /// </remarks>
 /// <typeparam name="T">The field of constants (Rational or GaussianRational).</typeparam>
 public sealed class CoefficientRing<T>
