@@ -76,6 +76,10 @@ public class AngularMomentumTests
     {
         Assert.Equal("i*hbar*z*d_y - i*hbar*y*d_z", Lx.ToString());
         Assert.Equal(Lx, Op(Lx.ToString()));
+        Assert.Equal("i*hbar*(z*d_y - y*d_z)", Lx.ToFactoredString());
+        Assert.Equal(Lx, Op(Lx.ToFactoredString()));
+        Assert.Equal("-(x*d_x + 1)", Op("-d_x*x").ToFactoredString());
+        Assert.Equal("d_x", Op("d_x").ToFactoredString());
         // d_x x = x d_x + 1 (Leibniz rule; common practice).
         Assert.Equal("x*d_x + 1", Op("d_x*x").ToString());
         Assert.Equal("x^2*d_x^2 + 4*x*d_x + 2", Op("d_x^2*x^2").ToString());

@@ -9,7 +9,7 @@ public class CoulombTests
     private static readonly CoefficientRing<GaussianRational> Ring =
         new CoefficientRingBuilder<GaussianRational>("Cartesian with 1/r")
             .Coordinates("x", "y", "z")
-            .Parameters("k")
+            .Parameters("k", "E")
             .Function("rinv", ("x", "-x*rinv^3"), ("y", "-y*rinv^3"), ("z", "-z*rinv^3"))
             .Relation("rinv^2*(x^2 + y^2 + z^2) = 1")
             .Build();
@@ -69,5 +69,58 @@ public class CoulombTests
         var broken = wrong.CommutesWith(h);
         Assert.False(broken.Commutes);
         Assert.Equal(1, broken.Commutator.Order);
+    }
+
+    [Fact]
+    public void Square_of_the_Runge_Lenz_vector_satisfies_Pauli_identity()
+    {
+        // A.A = 2 H (L^2 + hbar^2) + k^2 with hbar = m = 1 (Pauli 1926; from memory).
+        var (h, l, a) = Build();
+        var l2 = l[0] * l[0] + l[1] * l[1] + l[2] * l[2];
+        var a2 = a[0] * a[0] + a[1] * a[1] + a[2] * a[2];
+        Assert.Equal(Op("2") * h * (l2 + Op("1")) + Op("k^2"), a2);
+    }
+
+    [Fact]
+    public void On_the_eigenspace_of_H_a_product_with_H_becomes_a_product_with_E()
+    {
+        var (h, l, _) = Build();
+        var l2 = l[0] * l[0] + l[1] * l[1] + l[2] * l[2];
+        var eigenspace = new Eigenspace<GaussianRational>("H", h, Ring.Element("E"));
+        // L^2 H f = E L^2 f when H f = E f (and H L^2 = L^2 H since [H, L^2] = 0): equal remainders.
+        var fromProduct = eigenspace.Simplify(l2 * h);
+        var fromE = eigenspace.Simplify(Op("E") * l2);
+        Assert.Equal(fromE.Operator, fromProduct.Operator);
+        Assert.Equal(fromE.Operator, eigenspace.Simplify(h * l2).Operator);
+        Assert.EndsWith("(on the eigenspace H = E)", fromProduct.ToString());
+        Assert.Equal(Op("E"), eigenspace.Simplify(h).Operator);
+        // The remainder has no d_x^2 term left (H's leading derivative).
+        Assert.True(fromProduct.Operator.CoefficientOf("x", "x").IsZero);
+    }
+
+    [Fact]
+    public void An_eigenspace_needs_an_invertible_leading_coefficient()
+    {
+        var error = Assert.Throws<AlgebraNotebook.Exact.ExactArgumentException>(
+            () => new Eigenspace<GaussianRational>("G", Op("(x + 1)*d_x^2 + d_y"), Ring.Element("E")));
+        Assert.Contains("x + 1", error.Message);
+    }
+
+    private static (DifferentialOperator<GaussianRational> H, DifferentialOperator<GaussianRational>[] L, DifferentialOperator<GaussianRational>[] A) Build()
+    {
+        var x = new[] { Op("x"), Op("y"), Op("z") };
+        var p = new[] { Op("-i*d_x"), Op("-i*d_y"), Op("-i*d_z") };
+        var l = Cross(x, p);
+        var h = Op("-(d_x^2 + d_y^2 + d_z^2)/2 - k*rinv");
+        var pl = Cross(p, l);
+        var lp = Cross(l, p);
+        var half = new GaussianRational(new Rational(1, 2), 0);
+        var a = new DifferentialOperator<GaussianRational>[3];
+        for (var i = 0; i < 3; i++)
+        {
+            a[i] = half * (pl[i] - lp[i]) - Op("k*rinv") * x[i];
+        }
+
+        return (h, l, a);
     }
 }
