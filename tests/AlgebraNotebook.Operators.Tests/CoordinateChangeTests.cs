@@ -117,4 +117,29 @@ public class CoordinateChangeTests
         var error = Assert.Throws<ExactArgumentException>(() => CoordinateChange<Rational>.FromCoordinateFormulas(plane, polar, images));
         Assert.Contains("does not respect the relation", error.Message);
     }
+
+    [Fact]
+    public void User_declared_light_cone_coordinates_factor_the_wave_operator()
+    {
+        // u = x + t, v = x - t: d_t^2 - d_x^2 = -4 d_u d_v (d'Alembert's factorisation; common practice).
+        var xt = new CoefficientRingBuilder<Rational>("(x, t)").Coordinates("x", "t").Build();
+        var uv = new CoefficientRingBuilder<Rational>("light cone (u, v)").Coordinates("u", "v").Build();
+        var change = CoordinateChange<Rational>.FromCoordinateFormulas(xt, uv, new Dictionary<string, string> { ["x"] = "(u + v)/2", ["t"] = "(u - v)/2" });
+        Assert.Equal(uv.Element("-1/2"), change.JacobianDeterminant);
+        Assert.Equal(DifferentialOperator<Rational>.Parse(uv, "-4*d_u*d_v"), change.Apply(DifferentialOperator<Rational>.Parse(xt, "d_t^2 - d_x^2")));
+        Assert.Equal(uv.Element("u^2 - v^2"), change.Apply(xt.Element("4*x*t")));
+    }
+
+    [Fact]
+    public void A_change_with_a_non_invertible_jacobian_is_rejected()
+    {
+        var xt = new CoefficientRingBuilder<Rational>("(x, t) again").Coordinates("x", "t").Build();
+        var uv = new CoefficientRingBuilder<Rational>("(u, v) again").Coordinates("u", "v").Build();
+        var images = new Dictionary<string, string> { ["x"] = "u + v", ["t"] = "u^2" };
+        var error = Assert.Throws<ExactArgumentException>(() => CoordinateChange<Rational>.FromCoordinateFormulas(xt, uv, images));
+        Assert.Contains("Jacobian determinant -2*u", error.Message);
+        var missing = Assert.Throws<ExactArgumentException>(
+            () => CoordinateChange<Rational>.FromCoordinateFormulas(xt, uv, new Dictionary<string, string> { ["x"] = "u" }));
+        Assert.Contains("t of ring", missing.Message);
+    }
 }

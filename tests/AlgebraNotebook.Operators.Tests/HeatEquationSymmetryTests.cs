@@ -57,6 +57,15 @@ public class HeatEquationSymmetryTests
     }
 
     [Fact]
+    public void Vector_fields_from_components_act_on_coefficients()
+    {
+        var v = VectorField<Rational>.FromComponents(Ring, ("x", Ring.Element("2*t")), ("u", Ring.Element("-x*u")));
+        Assert.Equal(Fields[4], v);
+        // v5 applied to u*x: 2t*u - x*u*x (hand computation).
+        Assert.Equal(Ring.Element("2*t*u - x^2*u"), v.Apply(Ring.Element("u*x")));
+    }
+
+    [Fact]
     public void A_second_order_operator_is_not_a_vector_field()
     {
         var error = Assert.Throws<AlgebraNotebook.Exact.ExactArgumentException>(
