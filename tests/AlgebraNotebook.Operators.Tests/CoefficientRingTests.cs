@@ -26,6 +26,24 @@ public class CoefficientRingTests
     }
 
     [Fact]
+    public void Exponential_and_sine_declared_by_derivatives_give_a_solution_of_the_heat_equation()
+    {
+        // u = e^{-t} sin x solves u_t = u_xx (separation of variables; common practice).
+        var ring = new CoefficientRingBuilder<Rational>("heat solutions")
+            .Coordinates("x", "t")
+            .Function("emt", ("t", "-emt"))
+            .Function("s", ("x", "c"))
+            .Function("c", ("x", "-s"))
+            .Relation("s^2 + c^2 = 1")
+            .Build();
+        var heat = DifferentialOperator<Rational>.Parse(ring, "d_t - d_x^2");
+        Assert.True(heat.Apply(ring.Element("emt*s")).IsZero);
+        Assert.False(heat.Apply(ring.Element("emt*s^2")).IsZero);
+        // d_x (s^2 + c^2) = 0 is consistent with the relation; d_x^4 s = s.
+        Assert.Equal(ring.Element("s"), DifferentialOperator<Rational>.Parse(ring, "d_x^4").Apply(ring.Element("s")));
+    }
+
+    [Fact]
     public void Cotangent_declared_with_its_derivative_is_checked_against_the_relation_cot_sin_equals_cos()
     {
         // d/dtheta cot = -1 - cot^2 (common practice); compatible with cot*st = ct, st' = ct, ct' = -st.
