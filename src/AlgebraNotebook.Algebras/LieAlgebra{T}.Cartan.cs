@@ -1,0 +1,212 @@
+using AlgebraNotebook.Algebras.Internal;
+using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Matrices;
+using AlgebraNotebook.Exact.Scalars;
+
+namespace AlgebraNotebook.Algebras;
+
+public sealed partial class LieAlgebra<T>
+{
+    private const int RandomAttempts = 12;
+
+    /// <summary>
+    /// A Cartan subalgebra (nilpotent and self-normalizing), as a canonical basis. Search order, so that split Cartan
+    /// subalgebras are found for the usual bases: (1) the basis elements whose ad is diagonalisable over the field are
+    /// collected, a maximal commuting set is chosen greedily, and the Fitting null component of ad x is taken for a
+    /// random combination x of that set; (2) otherwise the Fitting null component of ad x for random elements x
+    /// (for regular x it is a Cartan subalgebra: Humphreys §15.3 and de Graaf, chapter on Cartan subalgebras, both from memory).
+    /// Each candidate is verified (nilpotent and equal to its normalizer) before it is returned; random choices use a fixed seed.
+    /// </summary>
+    /// <exception cref="BeyondCapabilityException">No verified Cartan subalgebra was found within the attempts (the message says how many).</exception>
+    public IReadOnlyList<LieElement<T>> CartanSubalgebra() => ToElements(CartanCore());
+
+    /// <summary>
+    /// The rank: the dimension of a Cartan subalgebra (for a semisimple algebra, the rank of its root system).
+    /// </summary>
+    /// <exception cref="BeyondCapabilityException">See <see cref="CartanSubalgebra"/>.</exception>
+    public int Rank => CartanCore().Length;
+
+    /// <summary>
+    /// The root decomposition of a semisimple algebra with respect to <see cref="CartanSubalgebra"/>. A random element h
+    /// of the Cartan subalgebra (fixed seed) is diagonalised; its non-zero eigenvalues must be simple and lie in the field,
+    /// otherwise the result is marked not split with a note (for a real algebra: complexify with
+    /// <see cref="RealLieAlgebras.Complexify"/>). Roots are ordered by the lexicographic order of their coordinates in a
+    /// basis made of the first r linearly independent roots found; the simple roots of that positive system give the
+    /// Cartan matrix, renumbered in Bourbaki's order and checked against the roots layer's Cartan matrix of the identified type.
+    /// </summary>
+    /// <exception cref="ExactArgumentException">The algebra is not semisimple.</exception>
+    public RootDecomposition<T> RootDecomposition()
+    {
+        if (!IsSemisimple)
+        {
+            throw new ExactArgumentException($"{Label} is not semisimple (degenerate Killing form); root decompositions are defined here for semisimple algebras.", "this");
+        }
+
+        var h = CartanCore();
+        var r = h.Length;
+        var hElements = ToElements(h);
+        var random = new Random(4242);
+        string note = "";
+        for (var attempt = 0; attempt < RandomAttempts; attempt++)
+        {
+            var x = Vectors<T>.Zero(Dimension);
+            foreach (var v in h)
+            {
+                Vectors<T>.AddScaled(x, T.FromInteger(random.Next(-20, 21)), v);
+            }
+
+            var eigen = FieldOperations<T>.Eigen(AdjointCore(x));
+            if (!eigen.IsComplete)
+            {
+                note = $"ad({FormatVector(x)}) for an element of the Cartan subalgebra has the characteristic factor {eigen.RemainingFactor} without roots in {FieldOperations<T>.FieldName}: the Cartan subalgebra found is not split over {FieldOperations<T>.FieldName}"
+                    + (typeof(T) == typeof(Rational) ? "; complexify the algebra (Complexify) to work over Q(i)." : ".");
+                return new RootDecomposition<T>(hElements, false, note, [], [], null, null);
+            }
+
+            var nonzero = eigen.Eigenvalues.Where(e => !e.Value.IsZero).ToList();
+            if (nonzero.Any(e => e.AlgebraicMultiplicity != 1))
+            {
+                note = "no element with simple non-zero eigenvalues was found";
+                continue;
+            }
+
+            var roots = new List<(T[] Values, T[] Vector)>();
+            var ok = true;
+            foreach (var e in nonzero)
+            {
+                var v = Flatten(e.Eigenspace[0]);
+                var p = Array.FindIndex(v, c => !c.IsZero);
+                var values = new T[r];
+                for (var i = 0; i < r && ok; i++)
+                {
+                    var image = BracketCore(h[i], v);
+                    values[i] = image[p] / v[p];
+                    ok = Vectors<T>.Equal(image, Vectors<T>.Scale(values[i], v));
+                }
+
+                roots.Add((values, v));
+            }
+
+            if (!ok)
+            {
+                note = "the Cartan subalgebra is not simultaneously diagonalisable";
+                continue;
+            }
+
+            return BuildRootData(hElements, h, roots);
+        }
+
+        throw new BeyondCapabilityException($"Root decomposition of {Label}: {note} after {RandomAttempts} random elements of the Cartan subalgebra.");
+    }
+
+    private RootDecomposition<T> BuildRootData(IReadOnlyList<LieElement<T>> hElements, T[][] h, List<(T[] Values, T[] Vector)> roots)
+    {
+        var r = h.Length;
+
+        // (α, β) = α^T κ^{-1} β with κ the Killing form restricted to h.
+        var killing = KillingForm();
+        var kappa = Matrix<T>.FromFunction(r, r, (i, j) => Bilinear(killing, h[i], h[j]));
+        var kappaInverse = LinearAlgebra.Inverse(kappa);
+        T Inner(T[] a, T[] b) => Bilinear(kappaInverse, a, b);
+
+        // Ordering basis: the first r independent roots; every root has rational coordinates in it.
+        var ordering = new List<T[]>();
+        foreach (var (values, _) in roots)
+        {
+            if (Vectors<T>.EchelonBasis(ordering.Append(values), r).Length > ordering.Count)
+            {
+                ordering.Add(values);
+            }
+        }
+
+        var orderSolver = CoordinateSolver<T>.Create(ordering, r);
+        var coordinates = roots.Select(root => orderSolver.TryCoordinates(root.Values)!
+            .Select(c => RationalPart<T>.TryToRational(c) ?? throw new InvalidOperationException("A root has non-rational coordinates in a basis of roots.")).ToArray()).ToList();
+        bool Positive(Rational[] c) => c.First(x => !x.IsZero).Sign > 0;
+        var positive = Enumerable.Range(0, roots.Count).Where(i => Positive(coordinates[i])).ToList();
+        var positiveSet = positive.Select(i => coordinates[i]).ToList();
+        var simple = positive.Where(i => !positiveSet.Any(a => positiveSet.Any(b =>
+            Enumerable.Range(0, r).All(k => a[k] + b[k] == coordinates[i][k])))).ToList();
+        if (simple.Count != r)
+        {
+            throw new InvalidOperationException($"Root decomposition of {Label}: found {simple.Count} simple roots for rank {r}.");
+        }
+
+        var cartan = new Rational[r, r];
+        for (var i = 0; i < r; i++)
+        {
+            for (var j = 0; j < r; j++)
+            {
+                var value = T.FromInteger(2) * Inner(roots[simple[i]].Values, roots[simple[j]].Values) / Inner(roots[simple[i]].Values, roots[simple[i]].Values);
+                cartan[i, j] = RationalPart<T>.TryToRational(value) ?? throw new InvalidOperationException("A Cartan integer is not rational.");
+            }
+        }
+
+        var (type, order) = CartanIdentification.Identify(cartan);
+        var simpleOrdered = order.Select(i => simple[i]).ToArray();
+        var cartanMatrix = Matrix<Rational>.FromFunction(r, r, (i, j) => cartan[order[i], order[j]]);
+        var reference = Roots.RootSystem.Of(type).CartanMatrix;
+        if (reference != cartanMatrix)
+        {
+            throw new InvalidOperationException($"Root decomposition of {Label}: the Cartan matrix {cartanMatrix} does not match {type} ({reference}).");
+        }
+
+        // Simple-root coordinates of every root (integers by theory; checked).
+        var simpleSolver = CoordinateSolver<T>.Create(simpleOrdered.Select(i => roots[i].Values).ToList(), r);
+        var spaces = roots.Select(root =>
+        {
+            var c = simpleSolver.TryCoordinates(root.Values)!.Select(v => RationalPart<T>.TryToRational(v) is { IsInteger: true } q ? (int)q.Numerator : throw new InvalidOperationException("Non-integral simple-root coordinates.")).ToArray();
+            return new RootSpace<T>(root.Values, new LieElement<T>(this, root.Vector), c);
+        }).ToList();
+        var ordered = spaces.Where(s => s.IsPositive).OrderBy(s => s.Height).ThenByDescending(s => string.Join(",", s.SimpleRootCoordinates))
+            .Concat(spaces.Where(s => !s.IsPositive).OrderBy(s => -s.Height).ThenBy(s => string.Join(",", s.SimpleRootCoordinates)))
+            .ToArray();
+        var simpleSpaces = simpleOrdered.Select(i => spaces[i]).ToArray();
+        return new RootDecomposition<T>(hElements, true, $"split over {FieldOperations<T>.FieldName}: type {type}, {roots.Count} roots", ordered, simpleSpaces, cartanMatrix, type);
+    }
+
+    private T[][] CartanCore() => _cartan.Value;
+
+    private T[][] ComputeCartanSubalgebra()
+    {
+        var random = new Random(1234);
+        var diagonalisable = new List<T[]>();
+        foreach (var e in AllBasis())
+        {
+            var ad = AdjointCore(e);
+            if (ad.IsZero || FieldOperations<T>.Eigen(ad).IsDiagonalisable)
+            {
+                diagonalisable.Add(e);
+            }
+        }
+
+        var commuting = new List<T[]>();
+        foreach (var e in diagonalisable)
+        {
+            if (commuting.All(c => Vectors<T>.IsZero(BracketCore(c, e))))
+            {
+                commuting.Add(e);
+            }
+        }
+
+        var tried = 0;
+        for (var attempt = 0; attempt < 2 * RandomAttempts; attempt++)
+        {
+            var pool = attempt < RandomAttempts && commuting.Count > 0 ? commuting.ToArray() : AllBasis();
+            var x = Vectors<T>.Zero(Dimension);
+            foreach (var v in pool)
+            {
+                Vectors<T>.AddScaled(x, T.FromInteger(random.Next(-20, 21)), v);
+            }
+
+            tried++;
+            var fitting = Echelon(LinearAlgebra.NullSpace(AdjointCore(x).Pow(Dimension)).Select(Flatten));
+            if (fitting.Length > 0 && SubalgebraOnBasis(fitting).IsNilpotent && NormalizerCore(fitting).Length == fitting.Length)
+            {
+                return fitting;
+            }
+        }
+
+        throw new BeyondCapabilityException($"No Cartan subalgebra of {Label} was verified after {tried} random elements.");
+    }
+}

@@ -1,0 +1,78 @@
+using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Scalars;
+
+namespace AlgebraNotebook.Algebras;
+
+public sealed partial class LieAlgebra<T>
+{
+    /// <summary>
+    /// The main invariants in one object (<see cref="LieAlgebraSummary"/>): nilpotent / solvable / semisimple, dimensions
+    /// of centre, derived algebra, radical and nilradical, the Levi factor and its Cartan type over C (for
+    /// LieAlgebra&lt;Rational&gt; the Levi factor is complexified first), the simple ideals of a semisimple algebra.
+    /// Cost: a Levi decomposition plus a root decomposition of the Levi factor.
+    /// </summary>
+    public LieAlgebraSummary Summary()
+    {
+        var notes = new List<string>();
+        var semisimple = IsSemisimple;
+        var levi = LeviDecomposition();
+        Roots.CartanType? type = null;
+        if (levi.LeviFactor.Count > 0)
+        {
+            var factor = SubalgebraOnBasis(levi.LeviFactor.Select(e => e.CoefficientArray).ToArray());
+            try
+            {
+                var roots = factor is LieAlgebra<Rational> real
+                    ? (object)real.Complexify().RootDecomposition()
+                    : factor.RootDecomposition();
+                switch (roots)
+                {
+                    case RootDecomposition<GaussianRational> complex when complex.IsSplit:
+                        type = complex.Type;
+                        break;
+                    case RootDecomposition<T> own when own.IsSplit:
+                        type = own.Type;
+                        break;
+                    case RootDecomposition<GaussianRational> complex:
+                        notes.Add($"type not reached: {complex.Note}");
+                        break;
+                    case RootDecomposition<T> own:
+                        notes.Add($"type not reached: {own.Note}");
+                        break;
+                }
+            }
+            catch (BeyondCapabilityException e)
+            {
+                notes.Add($"type not reached: {e.Message}");
+            }
+        }
+
+        IReadOnlyList<int> simple = [];
+        if (semisimple)
+        {
+            try
+            {
+                simple = SimpleIdeals().Select(i => i.Count).ToArray();
+            }
+            catch (BeyondCapabilityException e)
+            {
+                notes.Add($"simple ideals not separated: {e.Message}");
+            }
+        }
+
+        return new LieAlgebraSummary(
+            Dimension,
+            IsAbelian,
+            IsNilpotent,
+            IsSolvable,
+            semisimple,
+            CenterCore().Length,
+            BracketSpaces(AllBasis(), AllBasis()).Length,
+            levi.Radical.Count,
+            Nilradical().Count,
+            levi.LeviFactor.Count,
+            type,
+            simple,
+            notes);
+    }
+}
