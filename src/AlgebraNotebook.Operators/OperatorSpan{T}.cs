@@ -1,3 +1,4 @@
+using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Polynomials;
@@ -152,6 +153,15 @@ public sealed class OperatorSpan<T>
 
         return new StructureConstantTable<T>(Names, c);
     }
+
+    /// <summary>
+    /// The Lie algebra spanned by the operators: <see cref="StructureConstants"/> turned into a
+    /// <see cref="LieAlgebra{T}"/> with the operator names as basis names.
+    /// </summary>
+    /// <param name="label">Optional description for display.</param>
+    /// <exception cref="ExactArgumentException">Some commutator is not a constant-coefficient combination of the span
+    /// (the message names the pair and shows the commutator).</exception>
+    public LieAlgebra<T> ToLieAlgebra(string? label = null) => StructureConstants().ToLieAlgebra(label);
 
     private T[] ToColumn(DifferentialOperator<T> op)
     {

@@ -1,4 +1,5 @@
 using System.Text;
+using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
@@ -44,6 +45,13 @@ public sealed class StructureConstantTable<T>
             return _c[i, j, k];
         }
     }
+
+    /// <summary>
+    /// The Lie algebra with these structure constants and basis names (checked for antisymmetry and the Jacobi identity
+    /// by <see cref="LieAlgebra{T}.FromStructureConstants"/>; commutators of operators always pass).
+    /// </summary>
+    /// <param name="label">Optional description for display, e.g. "rotations".</param>
+    public LieAlgebra<T> ToLieAlgebra(string? label = null) => LieAlgebra<T>.FromStructureConstants(BasisNames, ToTensor(), label);
 
     /// <summary>A copy of the tensor: element [i, j, k] is c_ij^k.</summary>
     public T[,,] ToTensor() => (T[,,])_c.Clone();
