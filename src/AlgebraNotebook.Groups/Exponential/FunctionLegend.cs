@@ -75,7 +75,8 @@ public sealed class FunctionLegend
     {
         ArgumentNullException.ThrowIfNull(parameter);
         ArgumentNullException.ThrowIfNull(rates);
-        return Build(rates.Select(r => (parameter, r)));
+        var legend = Build(rates.Select(r => (parameter, r)));
+        return legend.IsEmpty ? Empty : legend;
     }
 
     /// <summary>

@@ -198,7 +198,7 @@ public static class MatrixExponential
         return Matrix<TruncatedSeries<T>>.FromFunction(n, n, (i, j) => TruncatedSeries<T>.FromTerms(terms[i, j], order, [t]));
     }
 
-    private static Matrix<QuotientElement<T>> ClosedFormCore<T>(JordanSplit<T> split, Symbol t, FunctionLegend legend)
+    internal static Matrix<QuotientElement<T>> ClosedFormCore<T>(JordanSplit<T> split, Symbol t, FunctionLegend legend)
         where T : IFieldElement<T>
     {
         var n = split.Matrix.RowCount;

@@ -1,0 +1,103 @@
+using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Matrices;
+using AlgebraNotebook.Exact.Polynomials;
+using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.Groups.Elements;
+
+namespace AlgebraNotebook.Groups.Tests.Elements;
+
+public class GroupElementTests
+{
+    private static readonly MatrixGroup<Rational> So3 = StandardGroups.SpecialOrthogonal(3);
+    private static readonly MatrixGroup<Rational> Lorentz = StandardGroups.Lorentz();
+
+    private static Polynomial<Rational> P(string text) => Polynomial<Rational>.Parse(text);
+
+    [Fact]
+    public void Collinear_boosts_add_rapidities()
+    {
+        // Collinear boosts compose by adding rapidities (common practice): B(z1) B(z2) = B(z1 + z2), checked through the addition theorems
+        // cosh(a + b) = ch_a ch_b + sh_a sh_b, sinh(a + b) = sh_a ch_b + ch_a sh_b (common practice).
+        var product = Lorentz.Exponential("K_x", "z1") * Lorentz.Exponential("K_x", "z2");
+        var single = Lorentz.Exponential("K_x", "z");
+        var ring = product.Legend.Ring<Rational>();
+        var ch = P("ch_z1 ch_z2 + sh_z1 sh_z2");
+        var sh = P("sh_z1 ch_z2 + ch_z1 sh_z2");
+        var expected = single.Matrix!.Map(e => ring.Element(e.Representative.Substitute(AlgebraNotebook.Exact.Symbols.Symbol.Of("ch_z"), ch)
+            .Substitute(AlgebraNotebook.Exact.Symbols.Symbol.Of("sh_z"), sh)));
+        Assert.True(product.IsEqualTo(expected), $"{product}");
+        Assert.Equal(ring.Element(ch), product.Matrix![3, 3]);
+    }
+
+    [Fact]
+    public void Inverse_times_element_is_the_identity()
+    {
+        var g = So3.Exponential("L_x", "a") * Lorentz3(So3.Exponential("L_y", "b"));
+        var identity = GroupElements.Identity<Rational>(3);
+        Assert.True((g * g.Inverse()).IsEqualTo(identity));
+        Assert.True((g.Inverse() * g).IsEqualTo(identity));
+    }
+
+    private static GroupElement<Rational> Lorentz3(GroupElement<Rational> g) => g;
+
+    [Fact]
+    public void Adjoint_action_of_a_rotation_about_z_rotates_the_generator_L_x()
+    {
+        // Ad_{R_z(θ)} L_x = cos θ L_x + sin θ L_y (rotation of the axis vector; common practice).
+        var g = So3.Exponential("L_z", "theta");
+        var ad = g.Adjoint(So3.Generator("L_x"));
+        var ring = g.Legend.Ring<Rational>();
+        var expected = So3.Generator("L_x").Map(v => ring.Element(P("c_theta") * Polynomial<Rational>.Constant(v)))
+            + So3.Generator("L_y").Map(v => ring.Element(P("s_theta") * Polynomial<Rational>.Constant(v)));
+        Assert.Equal(expected, ad);
+    }
+
+    [Fact]
+    public void Euler_z_y_z_intrinsic_matches_the_textbook_product()
+    {
+        // z-y-z intrinsic: R = R_z(α) R_y(β) R_z(γ); entry (2, 2) = cos β and (0, 2) = cos α sin β (common practice).
+        var r = EulerAngles.ZYZIntrinsic();
+        var ring = r.Legend.Ring<Rational>();
+        Assert.True(ring.AreEqual(r.Matrix![2, 2].Representative, P("c_beta")));
+        Assert.True(ring.AreEqual(r.Matrix![0, 2].Representative, P("c_alpha s_beta")));
+        Assert.True(ring.AreEqual(r.Matrix![2, 0].Representative, P("-s_beta c_gamma")));
+        Assert.Contains("z-y-z intrinsic", r.ToString());
+        // Intrinsic (α, β, γ) equals extrinsic with the angles reversed (common practice).
+        Assert.True(r.IsEqualTo(EulerAngles.Rotation("z-y-z", intrinsic: false, "gamma", "beta", "alpha")));
+    }
+
+    [Fact]
+    public void First_kind_coordinates_on_the_heisenberg_group_are_polynomial()
+    {
+        // exp(a X + b Y + c Z) = [[1, a, c + a b/2], [0, 1, b], [0, 0, 1]] (common practice).
+        var h = StandardGroups.Heisenberg();
+        var g = GroupElements.FirstKind([h.Generator("X"), h.Generator("Y"), h.Generator("Z")], ["a", "b", "c"], ["X", "Y", "Z"]);
+        Assert.True(g.IsExact);
+        var ring = g.Legend.Ring<Rational>();
+        Assert.Equal(ring.Element(P("c + 1/2 a b")), g.Matrix![0, 2]);
+        // Second kind differs: exp(a X) exp(b Y) exp(c Z) has corner c + a b.
+        var second = GroupElements.SecondKind([h.Generator("X"), h.Generator("Y"), h.Generator("Z")], ["a", "b", "c"]);
+        Assert.True(second.Legend.Ring<Rational>().AreEqual(P("c + a b"), second.Matrix![0, 2].Representative));
+    }
+
+    [Fact]
+    public void First_kind_coordinates_on_so3_fall_back_to_a_labelled_series()
+    {
+        var g = GroupElements.FirstKind([So3.Generator("L_x"), So3.Generator("L_y")], ["a", "b"], seriesOrder: 4);
+        Assert.False(g.IsExact);
+        Assert.Contains("truncated series", g.Note);
+        // Its second-order part is (a L_x + b L_y)^2 / 2 (common practice): entry (0, 0) is -b^2/2.
+        Assert.Equal("1 - 1/2*b^2 + O((a, b)^4)", g.Series![0, 0].ToString());
+    }
+
+    [Fact]
+    public void Mismatched_sizes_are_rejected()
+    {
+        var error = Assert.Throws<ExactArgumentException>(() => So3.Exponential("L_x", "a") * Lorentz.Exponential("K_x", "z"));
+        Assert.Contains("3x3", error.Message);
+        Assert.Throws<ExactArgumentException>(() => GroupElements.FirstKind([So3.Generator("L_x"), Lorentz.Generator("K_x")], ["a", "b"]));
+        Assert.Throws<ExactArgumentException>(() => GroupElements.FirstKind([So3.Generator("L_x")], ["a", "b"]));
+        Assert.Throws<ExactArgumentException>(() => So3.Generator("K_x"));
+        Assert.Throws<ExactArgumentException>(() => GroupElements.Constant(Matrix.ParseRational("[[1, 2], [2, 4]]")));
+    }
+}
