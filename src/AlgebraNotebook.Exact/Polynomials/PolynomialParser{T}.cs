@@ -243,7 +243,8 @@ internal sealed class PolynomialParser<T>
             _position++;
         }
 
-        if (!AtEnd && (Current == '.' || Current == '/'))
+        // "x^2/3" means (x^2)/3, as in ordinary precedence; only a decimal point makes the exponent fractional.
+        if (!AtEnd && Current == '.')
         {
             throw new ExactParseException(_text, _position, "exponents must be non-negative integers");
         }

@@ -103,6 +103,14 @@ public class PolynomialParsingTests
     }
 
     [Fact]
+    public void A_power_divided_by_a_number_follows_ordinary_precedence()
+    {
+        // Common practice: '^' binds tighter than '/', so x^2/3 is (x^2)/3, not x^(2/3).
+        Assert.Equal(Q("1/3 theta^2"), Q("theta^2/3"));
+        Assert.Equal(Q("(x + y)^2 * 1/4"), Q("(x + y)^2/4"));
+    }
+
+    [Fact]
     public void TryParse_returns_false_on_bad_text()
     {
         Assert.False(Polynomial<Rational>.TryParse("x^", out _));
