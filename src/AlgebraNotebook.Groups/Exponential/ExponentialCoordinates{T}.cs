@@ -118,14 +118,21 @@ public sealed class ExponentialCoordinates<T>
         return result;
     }
 
-    /// <summary>"s*L_x + t*L_y + s*t*L_z + O(3)": the coordinates in the given basis, grouped by order.</summary>
+    /// <summary>"log(word) = order 2: s*t*L_z; order 3: -1/2*s^2*t*L_y + 1/2*s*t^2*L_x; + O(order 4)": the coordinates in the given basis, grouped by order.</summary>
     /// <exception cref="ExactArgumentException">See <see cref="InBasis"/>.</exception>
     public string Describe(IReadOnlyList<(string Name, Matrix<T> Matrix)> basis)
     {
         var parts = InBasis(basis)
             .GroupBy(t => t.Monomial.TotalDegree)
-            .Select(g => $"order {g.Key}: " + string.Join(" + ", g.SelectMany(t => t.Combination.Select(c => $"({c.Coefficient})*{t.Monomial}*{c.Name}"))));
+            .Select(g => $"order {g.Key}: " + string.Join(" + ", g.SelectMany(t => t.Combination.Select(c => Term(c.Coefficient, t.Monomial, c.Name)))).Replace("+ -", "- ", StringComparison.Ordinal));
         return $"log({Word}) = " + string.Join("; ", parts) + $"; + O(order {Order})";
+    }
+
+    private static string Term(T coefficient, Monomial monomial, string name)
+    {
+        var c = coefficient.ToString() ?? "";
+        var prefix = coefficient.IsOne ? "" : (-coefficient).IsOne ? "-" : c.Contains(' ', StringComparison.Ordinal) ? $"({c})*" : c + "*";
+        return $"{prefix}{monomial}*{name}";
     }
 
     /// <summary>"log(word) = order 1: s*[[...]] + ...; order 2: ...; + O(order N)" with matrix coefficients.</summary>

@@ -29,6 +29,7 @@ public class WordExpansionTests
         // Third order: 1/2 s^2 t [L_x, [L_x, L_y]] + 1/2 s t^2 [L_y, [L_x, L_y]] (BCH of e^X e^Y e^-X e^-Y; common practice) = -1/2 s^2 t L_y + 1/2 s t^2 L_x.
         Assert.Equal(So3.Generator("L_y").Map(v => v * new Rational(-1, 2)), z.Coefficient(M(("s", 2), ("t", 1))));
         Assert.Equal(So3.Generator("L_x").Map(v => v * new Rational(1, 2)), z.Coefficient(M(("s", 1), ("t", 2))));
+        Assert.Equal("log(exp(s L_x) exp(t L_y) exp(-s L_x) exp(-t L_y)) = order 2: s*t*L_z; order 3: -1/2*s^2*t*L_y + 1/2*s*t^2*L_x; + O(order 4)", z.Describe(So3.Generators));
     }
 
     [Fact]
