@@ -101,3 +101,43 @@ public class GroupElementTests
         Assert.Throws<ExactArgumentException>(() => GroupElements.Constant(Matrix.ParseRational("[[1, 2], [2, 4]]")));
     }
 }
+
+public class SeriesGroupElementTests
+{
+    private static readonly MatrixGroup<Rational> So3 = StandardGroups.SpecialOrthogonal(3);
+
+    [Fact]
+    public void A_series_element_times_its_inverse_agrees_with_the_identity()
+    {
+        var g = GroupElements.FirstKind([So3.Generator("L_x"), So3.Generator("L_y")], ["a", "b"], seriesOrder: 5);
+        Assert.True((g * g.Inverse()).IsEqualTo(GroupElements.Identity<Rational>(3)));
+        // Mixing with an exact element gives a series of the smaller order.
+        var mixed = g * So3.Exponential("L_z", "c");
+        Assert.False(mixed.IsExact);
+        Assert.Equal(5, mixed.SeriesOrder);
+    }
+
+    [Fact]
+    public void Adjoint_series_of_a_first_kind_element_starts_with_the_bracket()
+    {
+        // Ad_{exp(Y)} X = X + [Y, X] + 1/2 [Y, [Y, X]] + ... (common practice); Y = a L_x + b L_y, X = L_z.
+        var g = GroupElements.FirstKind([So3.Generator("L_x"), So3.Generator("L_y")], ["a", "b"], seriesOrder: 3);
+        var ad = g.AdjointSeries(So3.Generator("L_z"), 2);
+        // [a L_x + b L_y, L_z] = -a L_y + b L_x, so entry (0, 2) of the first-order part is b * (L_x)[0,2] - a * (L_y)[0,2] = -a.
+        Assert.Equal("-a + O((a, b)^2)", ad[0, 2].ToString());
+    }
+}
+
+public class GaussianExponentialTests
+{
+    [Fact]
+    public void Exp_of_minus_i_theta_sigma_z_over_2_is_diagonal_in_half_angle_symbols()
+    {
+        // exp(-i θ σ_z / 2) = diag(cos θ/2 - i sin θ/2, cos θ/2 + i sin θ/2) (Sakurai, Modern Quantum Mechanics, §3.2, from memory).
+        var e = AlgebraNotebook.Groups.Exponential.MatrixExponential.Of(StandardGroups.SpecialUnitary(2).Generator("X_z"), "theta");
+        var ring = e.Legend.Ring<GaussianRational>();
+        Assert.Equal(ring.Element(Polynomial<GaussianRational>.Parse("c_theta_2 - i s_theta_2")), e.ClosedForm![0, 0]);
+        Assert.Equal(ring.Element(Polynomial<GaussianRational>.Parse("c_theta_2 + i s_theta_2")), e.ClosedForm![1, 1]);
+        Assert.Contains("c_theta_2 = cos(theta/2)", e.ToString());
+    }
+}
