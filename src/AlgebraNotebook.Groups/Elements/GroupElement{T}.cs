@@ -139,6 +139,29 @@ public sealed class GroupElement<T>
     }
 
     /// <summary>
+    /// Exponential coordinates of an element close to the identity in its parameters: Z with exp(Z) = g, as a series to total
+    /// order <paramref name="order"/> (exact elements are first expanded in their parameters), grouped by order.
+    /// </summary>
+    /// <exception cref="ExactArgumentException">The order is out of range, or g is not the identity at zero parameters (the message explains).</exception>
+    public ExponentialCoordinates<T> Logarithm(int order, ExpansionLimits? limits = null)
+    {
+        (limits ?? ExpansionLimits.Default).CheckOrder(order, nameof(order));
+        var effective = IsExact ? order : Math.Min(order, SeriesOrder);
+        var (g, _) = AsSeries(effective);
+        var log = MatrixLogarithm.OfSeries(g, effective, limits);
+        var parameters = new SortedSet<Symbol>();
+        for (var i = 0; i < Size; i++)
+        {
+            for (var j = 0; j < Size; j++)
+            {
+                parameters.UnionWith(g[i, j].Parameters);
+            }
+        }
+
+        return WordExpansion.Coordinates(Description, log, effective, parameters.ToArray());
+    }
+
+    /// <summary>
     /// True when the two elements are equal as matrices modulo the relations of both legends (exact elements), or when
     /// their known series coefficients agree (if either is a series).
     /// </summary>

@@ -51,6 +51,13 @@ public static class WordExpansion
         }
 
         var log = SeriesMatrices.LogOnePlus(product - Matrix<TruncatedSeries<T>>.Identity(n), order);
+        return Coordinates(string.Join(" ", word.Select(f => f.ToString())), log, order, parameters);
+    }
+
+    internal static ExponentialCoordinates<T> Coordinates<T>(string description, Matrix<TruncatedSeries<T>> log, int order, IReadOnlyList<AlgebraNotebook.Exact.Symbols.Symbol> parameters)
+        where T : IFieldElement<T>
+    {
+        var n = log.RowCount;
         var monomials = new List<Monomial>();
         for (var i = 0; i < n; i++)
         {
@@ -62,7 +69,6 @@ public static class WordExpansion
 
         var ordered = TruncatedSeries<T>.FromTerms(monomials.Distinct().Select(m => (m, T.One)), order, parameters).Terms.Select(t => t.Monomial);
         var terms = ordered.Select(m => (m, Matrix<T>.FromFunction(n, n, (i, j) => log[i, j].Coefficient(m)))).Where(t => !t.Item2.IsZero).ToArray();
-        var description = string.Join(" ", word.Select(f => f.ToString()));
         return new ExponentialCoordinates<T>(description, order, parameters, terms, log);
     }
 

@@ -141,3 +141,27 @@ public class GaussianExponentialTests
         Assert.Contains("c_theta_2 = cos(theta/2)", e.ToString());
     }
 }
+
+public class GroupElementLogarithmTests
+{
+    [Fact]
+    public void Logarithm_of_euler_angles_near_the_identity_starts_with_the_summed_generators()
+    {
+        // R_z(α) R_y(β) R_z(γ) = exp((α + γ) L_z + β L_y + 1/2 αβ [L_z, L_y] + ...) by BCH to second order (common practice);
+        // [L_z, L_y] = -L_x.
+        var so3 = StandardGroups.SpecialOrthogonal(3);
+        var z = EulerAngles.ZYZIntrinsic().Logarithm(3);
+        var text = z.Describe(so3.Generators);
+        Assert.StartsWith("log(Euler[z-y-z intrinsic](alpha, beta, gamma)) = order 1: alpha*L_z + beta*L_y + gamma*L_z; order 2: ", text);
+        var alphaBeta = AlgebraNotebook.Exact.Polynomials.Monomial.FromFactors([(AlgebraNotebook.Exact.Symbols.Symbol.Of("alpha"), 1), (AlgebraNotebook.Exact.Symbols.Symbol.Of("beta"), 1)]);
+        Assert.Equal(so3.Generator("L_x").Map(v => v * new Rational(-1, 2)), z.Coefficient(alphaBeta));
+    }
+
+    [Fact]
+    public void Logarithm_of_an_element_away_from_the_identity_is_rejected()
+    {
+        var g = GroupElements.Constant(Matrix.Diagonal<Rational>(-2, new Rational(-1, 2)), "g");
+        var error = Assert.Throws<ExactArgumentException>(() => g.Logarithm(3));
+        Assert.Contains("not near the identity", error.Message);
+    }
+}
