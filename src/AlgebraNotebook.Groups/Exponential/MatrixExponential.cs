@@ -35,6 +35,7 @@ public static class MatrixExponential
     /// <param name="seriesOrder">Truncation order if no exact form exists.</param>
     /// <param name="limits">Caps for the series order; default <see cref="ExpansionLimits.Default"/>.</param>
     /// <exception cref="ExactArgumentException">X is not square, the parameter name is invalid or the series order is out of range.</exception>
+    /// <exception cref="BeyondCapabilityException">The exact eigenvalue search hit a limit (see <see cref="Eigenvalues"/>).</exception>
     public static MatrixExponential<Rational> Of(Matrix<Rational> generator, string parameter = "t", int seriesOrder = DefaultSeriesOrder, ExpansionLimits? limits = null) =>
         OfCore(generator, parameter, seriesOrder, limits);
 
@@ -44,6 +45,7 @@ public static class MatrixExponential
     /// <param name="seriesOrder">Truncation order if no exact form exists.</param>
     /// <param name="limits">Caps for the series order; default <see cref="ExpansionLimits.Default"/>.</param>
     /// <exception cref="ExactArgumentException">X is not square, the parameter name is invalid or the series order is out of range.</exception>
+    /// <exception cref="BeyondCapabilityException">The exact eigenvalue search hit a limit (see <see cref="Eigenvalues"/>).</exception>
     public static MatrixExponential<GaussianRational> Of(Matrix<GaussianRational> generator, string parameter = "t", int seriesOrder = DefaultSeriesOrder, ExpansionLimits? limits = null) =>
         OfCore(generator, parameter, seriesOrder, limits);
 

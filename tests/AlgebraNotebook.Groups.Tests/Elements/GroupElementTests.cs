@@ -32,13 +32,11 @@ public class GroupElementTests
     [Fact]
     public void Inverse_times_element_is_the_identity()
     {
-        var g = So3.Exponential("L_x", "a") * Lorentz3(So3.Exponential("L_y", "b"));
+        var g = So3.Exponential("L_x", "a") * So3.Exponential("L_y", "b") * GroupElements.Exponential(Matrix.ParseRational("[[1, 1, 0], [0, 1, 0], [0, 0, -2]]"), "c");
         var identity = GroupElements.Identity<Rational>(3);
         Assert.True((g * g.Inverse()).IsEqualTo(identity));
         Assert.True((g.Inverse() * g).IsEqualTo(identity));
     }
-
-    private static GroupElement<Rational> Lorentz3(GroupElement<Rational> g) => g;
 
     [Fact]
     public void Adjoint_action_of_a_rotation_about_z_rotates_the_generator_L_x()
@@ -163,5 +161,31 @@ public class GroupElementLogarithmTests
         var g = GroupElements.Constant(Matrix.Diagonal<Rational>(-2, new Rational(-1, 2)), "g");
         var error = Assert.Throws<ExactArgumentException>(() => g.Logarithm(3));
         Assert.Contains("not near the identity", error.Message);
+    }
+}
+
+public class SpecialUnitaryElementTests
+{
+    [Theory]
+    [InlineData("S_12")]
+    [InlineData("A_23")]
+    [InlineData("D_2")]
+    public void Exponentials_of_su3_generators_are_unitary_with_determinant_one(string generator)
+    {
+        // exp of an anti-Hermitian traceless matrix is in SU(n): U U^† = I, det U = e^{tr X} = 1 (common practice).
+        var su3 = StandardGroups.SpecialUnitary(3);
+        var u = su3.Exponential(generator, "t");
+        var ring = u.Legend.Ring<GaussianRational>();
+        var product = u.Matrix! * u.Matrix!.ConjugateTranspose();
+        for (var i = 0; i < 3; i++)
+        {
+            for (var j = 0; j < 3; j++)
+            {
+                Assert.True(ring.AreEqual(product[i, j].Representative, i == j ? Polynomial<GaussianRational>.One : Polynomial<GaussianRational>.Zero), $"{u}: (U U^†)[{i},{j}] = {product[i, j]}");
+            }
+        }
+
+        Assert.True(ring.AreEqual(LinearAlgebra.DeterminantLaplace(u.Matrix!).Representative, Polynomial<GaussianRational>.One));
+        Assert.True(u.InverseMatrix!.Equals(u.Matrix!.ConjugateTranspose()));
     }
 }
