@@ -12,7 +12,7 @@ public class ExponentialNumericCrossCheckTests
         int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var k) && k > 0 ? k : 1;
 
     // Reference: scaling and squaring with a Taylor polynomial in double precision (MathNet matrices), independent of the exact method.
-    private static MathNet.Numerics.LinearAlgebra.Matrix<Complex> ExpDouble(MathNet.Numerics.LinearAlgebra.Matrix<Complex> a)
+    internal static MathNet.Numerics.LinearAlgebra.Matrix<Complex> ExpDouble(MathNet.Numerics.LinearAlgebra.Matrix<Complex> a)
     {
         var norm = a.L1Norm();
         var squarings = Math.Max(0, (int)Math.Ceiling(Math.Log2(Math.Max(norm, 1e-300))) + 4);

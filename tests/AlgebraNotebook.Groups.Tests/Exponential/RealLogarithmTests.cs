@@ -23,6 +23,10 @@ public class RealLogarithmTests
         // Culver 1966: -2 has two 1x1 blocks (even); indeed exp([[ln 2, -π], [π, ln 2]]) = -2 I (common practice).
         var verdict = RealLogarithm.Decide(Matrix.Diagonal<Rational>(-2, -2));
         Assert.Equal(RealLogarithmAnswer.Exists, verdict.Answer);
+        // Witness, numerically: exp([[ln 2, -π], [π, ln 2]]) = -2 I.
+        var witness = MathNet.Numerics.LinearAlgebra.Complex.DenseMatrix.OfArray(new System.Numerics.Complex[,] { { Math.Log(2), -Math.PI }, { Math.PI, Math.Log(2) } });
+        var exp = ExponentialNumericCrossCheckTests.ExpDouble(witness);
+        Assert.True((exp[0, 0] + 2).Magnitude < 1e-9 && exp[0, 1].Magnitude < 1e-9 && (exp[1, 1] + 2).Magnitude < 1e-9, exp.ToString());
         Assert.Equal((-2, 1, 2), (verdict.NegativeEigenvalueBlocks[0].Eigenvalue.Numerator, verdict.NegativeEigenvalueBlocks[0].Blocks[0].Size, verdict.NegativeEigenvalueBlocks[0].Blocks[0].Count));
     }
 
