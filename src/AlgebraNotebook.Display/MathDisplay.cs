@@ -10,12 +10,17 @@ namespace AlgebraNotebook.Display;
 /// tree (<see cref="MathNode"/>), built by the converter registered for the object's type, so the formats always agree.
 /// </summary>
 /// <remarks>
-/// <para>Renderable out of the box: <see cref="Exact.Scalars.Rational"/>, <see cref="Exact.Scalars.GaussianRational"/>,
-/// <see cref="Exact.Symbols.Symbol"/>, <see cref="Exact.Polynomials.Monomial"/>, any <see cref="MathNode"/>, and the
-/// generic types <see cref="Exact.Polynomials.Polynomial{T}"/>, <see cref="Exact.Polynomials.QuotientElement{T}"/>
-/// (shown as its normal form), <see cref="Exact.Matrices.Matrix{T}"/>, <see cref="Exact.Matrices.UnivariatePolynomial{T}"/>
-/// (in its variable λ) and <see cref="Exact.Series.TruncatedSeries{T}"/> (terms by ascending total degree, then O(t^N)),
-/// whenever their type arguments are renderable. Entries and coefficients are converted recursively through the same
+/// <para>Renderable out of the box: <see cref="AlgebraNotebook.Exact.Scalars.Rational"/>, <see cref="AlgebraNotebook.Exact.Scalars.GaussianRational"/>,
+/// <see cref="AlgebraNotebook.Exact.Symbols.Symbol"/>, <see cref="AlgebraNotebook.Exact.Polynomials.Monomial"/>, any <see cref="MathNode"/>, and the
+/// generic types <see cref="AlgebraNotebook.Exact.Polynomials.Polynomial{T}"/>, <see cref="AlgebraNotebook.Exact.Polynomials.QuotientElement{T}"/>
+/// (shown as its normal form), <see cref="AlgebraNotebook.Exact.Matrices.Matrix{T}"/>, <see cref="AlgebraNotebook.Exact.Matrices.UnivariatePolynomial{T}"/>
+/// (in its variable λ) and <see cref="AlgebraNotebook.Exact.Series.TruncatedSeries{T}"/> (terms by ascending total degree, then O(t^N)),
+/// whenever their type arguments are renderable. The results of exact computations are renderable too (converters in
+/// the Exact folder): <see cref="AlgebraNotebook.Exact.Matrices.EigenDecomposition{T}"/> (a table of eigenvalues,
+/// multiplicities and eigenspace bases, then the characteristic polynomial and completeness in words),
+/// <see cref="AlgebraNotebook.Exact.Matrices.Eigenvalue{T}"/>, <see cref="AlgebraNotebook.Exact.Matrices.SolutionSet{T}"/>
+/// (particular solution plus the span of the null space), <see cref="AlgebraNotebook.Exact.Polynomials.QuotientRing{T}"/>
+/// (relations, reduced Groebner basis, monomial order) and <see cref="AlgebraNotebook.Exact.Polynomials.GroebnerStatistics"/>. Entries and coefficients are converted recursively through the same
 /// registry, so Matrix&lt;Polynomial&lt;GaussianRational&gt;&gt; works with no extra code.</para>
 /// <para>Conventions: numbers are exact (integers and built-up fractions, sign in front); the imaginary unit is an
 /// upright i (ISO 80000-2), LaTeX <c>\mathrm{i}</c>; symbol names are typeset by <see cref="SymbolNames"/>; plain
@@ -57,7 +62,7 @@ public static partial class MathDisplay
     /// The display tree of <paramref name="value"/>. Converters call this for nested values (coefficients, entries).
     /// </summary>
     /// <exception cref="ArgumentNullException"><paramref name="value"/> is null.</exception>
-    /// <exception cref="Exact.ExactArgumentException">No converter is registered for the value's type (the message names the type).</exception>
+    /// <exception cref="AlgebraNotebook.Exact.ExactArgumentException">No converter is registered for the value's type (the message names the type).</exception>
     public static MathNode ToTree(object value) => ConverterRegistry.ToTree(value);
 
     /// <summary>
@@ -65,20 +70,20 @@ public static partial class MathDisplay
     /// on one line, well-formed XML with all text escaped. Fractions are <c>mfrac</c>, powers <c>msup</c>, subscripts
     /// <c>msub</c>, matrices an <c>mtable</c> between stretchy fences; other fences state <c>stretchy</c> explicitly.
     /// </summary>
-    /// <exception cref="Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
+    /// <exception cref="AlgebraNotebook.Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
     public static string ToMathML(object value) => MathMLRenderer.Render(ToTree(value));
 
     /// <summary>
     /// A LaTeX math-mode fragment without delimiters (wrap it in <c>\[ ... \]</c> or <c>$ ... $</c>); needs amsmath
     /// for matrices. Example: <c>x^{2} y - 2 \hbar</c>.
     /// </summary>
-    /// <exception cref="Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
+    /// <exception cref="AlgebraNotebook.Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
     public static string ToLatex(object value) => LatexRenderer.Render(ToTree(value));
 
     /// <summary>
     /// One line of plain text such as <c>x^2*y - 2*hbar</c>, <c>1/2 - 3/5*i</c> or <c>[[1, 1/2], [0, -3/4]]</c>.
     /// </summary>
-    /// <exception cref="Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
+    /// <exception cref="AlgebraNotebook.Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
     public static string ToPlainText(object value) => PlainTextRenderer.Render(ToTree(value));
 
     /// <summary>
@@ -88,7 +93,7 @@ public static partial class MathDisplay
     /// a copy action or script can offer it. The MathML is <see cref="ToMathML"/> with one addition: a
     /// <c>style</c> attribute choosing a math font (<see cref="HtmlMathStyle"/>).
     /// </summary>
-    /// <exception cref="Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
+    /// <exception cref="AlgebraNotebook.Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
     public static string ToHtml(object value)
     {
         var tree = ToTree(value);

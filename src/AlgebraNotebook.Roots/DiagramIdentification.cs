@@ -9,9 +9,16 @@ internal static class DiagramIdentification
     /// <summary>The connected components of the nodes (zero-based), each identified; node lists are 1-based and increasing.</summary>
     public static List<(SimpleCartanType Type, int[] Nodes)> Identify(RootSystem system, IReadOnlyList<int> nodes)
     {
-        var remaining = new SortedSet<int>(nodes);
-        var result = new List<(SimpleCartanType, int[])>();
+        var components = Components(system.CartanEntry, nodes);
         var lengths = system.SimpleRootLengthsSquared;
+        return components.Select(c => (Classify(system.CartanEntry, c, lengths), c.Select(i => i + 1).ToArray())).ToList();
+    }
+
+    /// <summary>The connected components of the given nodes (zero-based), each sorted, ordered by their smallest node.</summary>
+    public static List<List<int>> Components(Func<int, int, int> entry, IReadOnlyList<int> nodes)
+    {
+        var remaining = new SortedSet<int>(nodes);
+        var result = new List<List<int>>();
         while (remaining.Count > 0)
         {
             var start = remaining.Min;
@@ -25,7 +32,7 @@ internal static class DiagramIdentification
                 component.Add(i);
                 foreach (var j in remaining.ToArray())
                 {
-                    if (system.CartanEntry(i, j) != 0)
+                    if (entry(i, j) != 0)
                     {
                         remaining.Remove(j);
                         stack.Push(j);
@@ -34,13 +41,14 @@ internal static class DiagramIdentification
             }
 
             component.Sort();
-            result.Add((Classify(system, component, lengths), component.Select(i => i + 1).ToArray()));
+            result.Add(component);
         }
 
         return result;
     }
 
-    private static SimpleCartanType Classify(RootSystem system, List<int> nodes, AlgebraNotebook.Exact.Scalars.Rational[] lengths)
+    /// <summary>The type of a connected sub-diagram of a finite-type diagram (a candidate only, for other inputs).</summary>
+    public static SimpleCartanType Classify(Func<int, int, int> entry, List<int> nodes, AlgebraNotebook.Exact.Scalars.Rational[] lengths)
     {
         var k = nodes.Count;
         if (k == 1)
@@ -55,10 +63,10 @@ internal static class DiagramIdentification
             degree[i] = 0;
             foreach (var j in nodes)
             {
-                if (i != j && system.CartanEntry(i, j) != 0)
+                if (i != j && entry(i, j) != 0)
                 {
                     degree[i]++;
-                    maxBond = Math.Max(maxBond, system.CartanEntry(i, j) * system.CartanEntry(j, i));
+                    maxBond = Math.Max(maxBond, entry(i, j) * entry(j, i));
                 }
             }
         }
@@ -98,8 +106,8 @@ internal static class DiagramIdentification
         }
 
         var centre = branch[0];
-        var arms = nodes.Where(j => j != centre && system.CartanEntry(centre, j) != 0)
-            .Select(j => ArmLength(system, nodes, centre, j))
+        var arms = nodes.Where(j => j != centre && entry(centre, j) != 0)
+            .Select(j => ArmLength(entry, nodes, centre, j))
             .OrderBy(x => x)
             .ToArray();
         if (arms[0] == 1 && arms[1] == 1)
@@ -110,14 +118,14 @@ internal static class DiagramIdentification
         return SimpleCartanType.Of(CartanFamily.E, k);
     }
 
-    private static int ArmLength(RootSystem system, List<int> nodes, int centre, int first)
+    private static int ArmLength(Func<int, int, int> entry, List<int> nodes, int centre, int first)
     {
         var previous = centre;
         var current = first;
         var length = 1;
         while (true)
         {
-            var next = nodes.Where(j => j != previous && j != current && system.CartanEntry(current, j) != 0).ToArray();
+            var next = nodes.Where(j => j != previous && j != current && entry(current, j) != 0).ToArray();
             if (next.Length == 0)
             {
                 return length;

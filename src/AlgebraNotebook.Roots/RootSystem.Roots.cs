@@ -37,10 +37,26 @@ public sealed partial class RootSystem
         }
     }
 
-    /// <summary>The highest root of each simple component, embedded in this system's coordinates (component order).</summary>
-    public IReadOnlyList<Root> HighestRoots => Enumerable.Range(0, Type.Components.Count)
-        .Select(c => _positive.Where(r => IsInComponent(r, c)).MaxBy(r => r.Height)!)
-        .ToArray();
+    /// <summary>
+    /// The highest root of each irreducible component, in this system's coordinates, ordered by the first node of the
+    /// component: the maximal positive roots (no beta + alpha_i is a root), one per component (two for D2).
+    /// </summary>
+    public IReadOnlyList<Root> HighestRoots
+    {
+        get
+        {
+            var set = _positive.Select(r => Weight.Own(r.SimpleRootCoordinates)).ToHashSet();
+            return _positive
+                .Where(r => Enumerable.Range(0, Rank).All(i =>
+                {
+                    var up = r.SimpleRootCoordinates;
+                    up[i]++;
+                    return !set.Contains(Weight.Own(up));
+                }))
+                .OrderBy(r => r.Coordinates.IndexOfAnyExcept(0))
+                .ToArray();
+        }
+    }
 
     /// <summary>The highest short root of a simple system (equal to the highest root when the system is simply laced).</summary>
     /// <exception cref="ExactArgumentException">The system is not simple.</exception>
@@ -70,27 +86,17 @@ public sealed partial class RootSystem
 
     internal void RequireSimple(string what)
     {
+        if (IsD2)
+        {
+            throw new ExactArgumentException(
+                $"D2 is isomorphic to A1+A1 and not simple: {what} is defined for each of its two A1 components (use A1+A1).", "this");
+        }
+
         if (!IsSimple)
         {
             throw new ExactArgumentException(
                 $"{Type} is not simple: {what} is defined for each simple component separately (see Components).", "this");
         }
-    }
-
-    private bool IsInComponent(Root root, int component)
-    {
-        var start = _componentOffsets[component];
-        var end = start + Type.Components[component].Rank;
-        var coordinates = root.Coordinates;
-        for (var i = 0; i < coordinates.Length; i++)
-        {
-            if (coordinates[i] != 0 && (i < start || i >= end))
-            {
-                return false;
-            }
-        }
-
-        return true;
     }
 
     private Root Negate(Root root)
@@ -107,50 +113,45 @@ public sealed partial class RootSystem
     private Root[] GeneratePositiveRoots()
     {
         var known = new HashSet<Weight>();
-        var layers = new List<List<int[]>>();
-        var first = new List<int[]>();
+        var layers = new List<List<(int[] Coordinates, int[] Labels)>>();
+        var first = new List<(int[], int[])>();
         for (var i = 0; i < Rank; i++)
         {
             var e = new int[Rank];
             e[i] = 1;
-            first.Add(e);
+            first.Add((e, LabelsOf(e)));
             known.Add(Weight.Own(e));
         }
 
         layers.Add(first);
         while (true)
         {
-            var next = new List<int[]>();
+            var next = new List<(int[], int[])>();
             var seen = new HashSet<Weight>();
-            foreach (var beta in layers[^1])
+            foreach (var (beta, labels) in layers[^1])
             {
-                var labels = LabelsOf(beta);
                 for (var i = 0; i < Rank; i++)
                 {
-                    // p: how far the alpha_i-string through beta reaches downwards (all lower roots are known).
-                    var p = 0;
-                    var probe = (int[])beta.Clone();
-                    while (true)
+                    // beta + alpha_i is a root iff q = p - <beta, alpha_i^vee> > 0, where p is how far the alpha_i-string
+                    // through beta reaches downwards; when the label is negative q > 0 without looking, otherwise only
+                    // p > label matters, so at most label + 1 lower roots (all already known) are probed.
+                    var label = labels[i];
+                    if (label >= 0 && !StringReachesBelow(beta, i, label + 1, known))
                     {
-                        probe[i]--;
-                        if (probe[i] < 0 || !known.Contains(Weight.Own(probe)))
-                        {
-                            break;
-                        }
-
-                        p++;
-                        probe = (int[])probe.Clone();
+                        continue;
                     }
 
-                    var q = p - labels[i];
-                    if (q > 0)
+                    var up = (int[])beta.Clone();
+                    up[i]++;
+                    if (seen.Add(Weight.Own(up)))
                     {
-                        var up = (int[])beta.Clone();
-                        up[i]++;
-                        if (seen.Add(Weight.Own(up)))
+                        var upLabels = (int[])labels.Clone();
+                        for (var j = 0; j < Rank; j++)
                         {
-                            next.Add(up);
+                            upLabels[j] += _cartan[j, i];
                         }
+
+                        next.Add((up, upLabels));
                     }
                 }
             }
@@ -160,7 +161,7 @@ public sealed partial class RootSystem
                 break;
             }
 
-            foreach (var r in next)
+            foreach (var (r, _) in next)
             {
                 known.Add(Weight.Own(r));
             }
@@ -172,33 +173,47 @@ public sealed partial class RootSystem
         for (var k = 0; k < layers.Count; k++)
         {
             // Height 1 keeps node order; higher layers are sorted so the listing does not depend on hashing.
-            var ordered = k == 0 ? layers[0] : layers[k].OrderByDescending(c => c, LexicographicComparer.Instance).ToList();
-            foreach (var c in ordered)
+            var ordered = k == 0 ? layers[0] : layers[k].OrderByDescending(c => c.Coordinates, LexicographicComparer.Instance).ToList();
+            foreach (var (c, labels) in ordered)
             {
-                var length = LengthSquaredOf(c);
-                roots.Add(new Root(c, length, length == 2, Weight.Own(LabelsOf(c))));
+                var length = LengthSquaredOf(c, labels);
+                roots.Add(new Root(c, length, length == 2, Weight.Own(labels)));
             }
         }
 
         return roots.ToArray();
     }
 
-    private AlgebraNotebook.Exact.Scalars.Rational LengthSquaredOf(int[] c)
+    /// <summary>True when beta - k alpha_i is a root for k = 1..steps.</summary>
+    private static bool StringReachesBelow(int[] beta, int i, int steps, HashSet<Weight> known)
+    {
+        if (beta[i] < steps)
+        {
+            return false;
+        }
+
+        for (var k = 1; k <= steps; k++)
+        {
+            var probe = (int[])beta.Clone();
+            probe[i] -= k;
+            if (!known.Contains(Weight.Own(probe)))
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>(beta, beta) = sum_i c_i (alpha_i, beta) = sum_i c_i &lt;beta, alpha_i^vee&gt; |alpha_i|^2 / 2, in O(rank).</summary>
+    private AlgebraNotebook.Exact.Scalars.Rational LengthSquaredOf(int[] c, int[] labels)
     {
         var sum = AlgebraNotebook.Exact.Scalars.Rational.Zero;
         for (var i = 0; i < Rank; i++)
         {
-            if (c[i] == 0)
+            if (c[i] != 0 && labels[i] != 0)
             {
-                continue;
-            }
-
-            for (var j = 0; j < Rank; j++)
-            {
-                if (c[j] != 0)
-                {
-                    sum += _lengths[i] / 2 * _cartan[i, j] * (c[i] * c[j]);
-                }
+                sum += _lengths[i] / 2 * (c[i] * labels[i]);
             }
         }
 

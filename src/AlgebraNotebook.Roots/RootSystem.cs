@@ -25,7 +25,7 @@ namespace AlgebraNotebook.Roots;
 public sealed partial class RootSystem
 {
     /// <summary>The largest total rank accepted by <see cref="Of(CartanType)"/>.</summary>
-    public const int MaximumRank = 200;
+    public const int MaximumRank = 100;
 
     private static readonly ConcurrentDictionary<CartanType, RootSystem> Cache = new();
 
@@ -112,8 +112,13 @@ public sealed partial class RootSystem
     /// <summary>The rank (number of simple roots).</summary>
     public int Rank { get; }
 
-    /// <summary>True when the type has one simple component.</summary>
-    public bool IsSimple => Type.IsSimple;
+    /// <summary>
+    /// True when the root system is irreducible: one simple component, and not D2 (which is accepted as a type but is
+    /// isomorphic to A1+A1).
+    /// </summary>
+    public bool IsSimple => Type.IsSimple && !IsD2;
+
+    private bool IsD2 => Type.Components[0] is { Family: CartanFamily.D, Rank: 2 } && Type.IsSimple;
 
     /// <summary>
     /// The Cartan matrix A_ij = &lt;alpha_i^vee, alpha_j&gt; = 2 (alpha_i, alpha_j) / (alpha_i, alpha_i) (row i: coroot of

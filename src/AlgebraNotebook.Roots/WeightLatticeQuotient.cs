@@ -5,7 +5,7 @@ namespace AlgebraNotebook.Roots;
 /// <summary>
 /// The finite abelian group P/Q (weight lattice modulo root lattice). It is the centre of the simply connected group
 /// and the fundamental group of the adjoint group; its order is the determinant of the Cartan matrix
-/// (Humphreys, Introduction to Lie Algebras, 13.1 and Exercise 13.5 / Table; Bourbaki Plates I-IX, item (VIII)).
+/// (Bourbaki Plates I-IX, item (VIII); Humphreys, Introduction to Lie Algebras, ch. 13).
 /// The cyclic factors are the invariant factors (greater than 1) of the Smith normal form of the Cartan matrix.
 /// </summary>
 public sealed class WeightLatticeQuotient

@@ -10,7 +10,7 @@ public sealed partial class WeylGroup
 
     /// <summary>
     /// The stabiliser of a weight: conjugate to the standard parabolic subgroup on the nodes where the dominant weight
-    /// in its orbit has label zero (Humphreys, Introduction to Lie Algebras, 10.3 Lemma B). Returned for the dominant weight.
+    /// in its orbit has label zero (Humphreys, Introduction to Lie Algebras, 10.3, from memory). Returned for the dominant weight.
     /// </summary>
     /// <exception cref="ExactArgumentException">The weight's rank differs from the system's.</exception>
     public ParabolicSubgroup Stabiliser(Weight weight)

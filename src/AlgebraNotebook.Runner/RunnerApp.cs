@@ -1,31 +1,37 @@
-using System.Text;
-using AlgebraNotebook.Runner.Documents;
+using System.Globalization;
 using AlgebraNotebook.Runner.Execution;
-using AlgebraNotebook.Runner.Reporting;
 
 namespace AlgebraNotebook.Runner;
 
 /// <summary>
-/// The algebra-notebook command line, callable in-process: <c>run &lt;notebook.ipynb|notebook.dib&gt; [--output &lt;report.html&gt;]</c>
-/// and <c>--help</c>. Exit codes: <see cref="ExitSuccess"/>, <see cref="ExitCellFailed"/>, <see cref="ExitUsageError"/>.
+/// The algebra-notebook command line, callable in-process: <c>run</c>, <c>check</c>, <c>export</c> and <c>--help</c>
+/// (see <see cref="HelpText"/>). Exit codes: <see cref="ExitSuccess"/>, <see cref="ExitCellFailed"/> (also
+/// <see cref="ExitOutputsDiffer"/>), <see cref="ExitUsageError"/>.
 /// </summary>
-public static class RunnerApp
+public static partial class RunnerApp
 {
-    /// <summary>Exit code when every code cell succeeded (or there were none).</summary>
+    /// <summary>Exit code when every code cell succeeded (or there were none), the outputs reproduce, or the export was written.</summary>
     public const int ExitSuccess = 0;
 
-    /// <summary>Exit code when at least one cell failed; all cells were still attempted and the report was written.</summary>
+    /// <summary>Exit code of <c>run</c> when at least one cell failed; all cells were still attempted and the report was written.</summary>
     public const int ExitCellFailed = 1;
 
-    /// <summary>Exit code for a usage error, an unreadable or malformed notebook, or a report that could not be written.</summary>
+    /// <summary>Exit code of <c>check</c> when at least one compared cell's outputs differ from the stored ones.</summary>
+    public const int ExitOutputsDiffer = 1;
+
+    /// <summary>Exit code for a usage error, an unreadable or malformed notebook, a notebook without stored outputs
+    /// (check, export), or a file that could not be written.</summary>
     public const int ExitUsageError = 2;
 
     /// <summary>The text printed by <c>--help</c>.</summary>
     public const string HelpText = """
-        algebra-notebook - run a C# notebook with AlgebraNotebook loaded and write an offline HTML report
+        algebra-notebook - run, check and export C# notebooks with AlgebraNotebook loaded
 
         Usage:
           algebra-notebook run <notebook.ipynb|notebook.dib> [--output <report.html>] [--cell-timeout <seconds>]
+                               [--write-notebook <out.ipynb> | --in-place] [--quiet]
+          algebra-notebook check <notebook.ipynb> [--cell-timeout <seconds>] [--quiet]
+          algebra-notebook export <notebook.ipynb> --format html|latex [--output <file>]
           algebra-notebook --help
 
         run       Executes every C# code cell in order in an in-process kernel, keeps the Markdown
@@ -37,19 +43,44 @@ public static class RunnerApp
           --cell-timeout <seconds>
                                 Longest time one code cell may run (default: no limit). A cell
                                 that runs longer fails, and the code cells after it are not run.
+          --write-notebook <path>
+                                Also save the notebook with its new outputs (nbformat 4.5 .ipynb:
+                                results and displays as text/html and text/plain, console text,
+                                errors, execution counts, cell ids). Its path is printed too.
+          --in-place            Save the outputs into the input .ipynb itself. The input is never
+                                overwritten unless this option is given.
+          --quiet, -q           No per-cell progress lines ("[3/12] cell 5 ... ok 0.4 s") on
+                                standard error.
+
+        check     Executes the notebook again and compares every C# code cell's new outputs with the
+                  outputs stored in the file: text/plain of results and displays, console text,
+                  and errors (name and message), ignoring trailing whitespace and line endings.
+                  A cell whose metadata holds {"algebranotebook": {"volatile": true}} is not
+                  compared, nor is a cell without a stored run (no execution count, no outputs).
+                  Differences are printed as a per-cell diff on standard output.
+                  Takes --cell-timeout and --quiet like run.
+
+        export    Writes a document from the outputs stored in an .ipynb file, without executing
+                  anything: --format html gives the offline HTML report, --format latex a LaTeX
+                  article (math outputs as \[ ... \] from their stored LaTeX, other outputs and
+                  code verbatim). Default output: next to the notebook, extension .html or .tex.
+                  The output path is printed on standard output.
+
           --help, -h            Show this text.
 
         Cells can use the AlgebraNotebook types directly: a using directive for every namespace of
         AlgebraNotebook.Exact and AlgebraNotebook.Display is submitted before the first cell.
 
-        Exit codes: 0 all cells succeeded; 1 at least one cell failed; 2 usage error or unreadable notebook.
+        Exit codes: 0 success (all cells succeeded, outputs reproduce, export written);
+        1 run: at least one cell failed, check: at least one cell's outputs differ;
+        2 usage error, unreadable notebook, or (check, export) a notebook without stored outputs.
         """;
 
     /// <summary>Parses <paramref name="args"/>, runs the command and returns the process exit code.</summary>
     /// <param name="args">Command-line arguments (without the program name).</param>
-    /// <param name="stdout">Receives the report path and help text.</param>
-    /// <param name="stderr">Receives usage errors, load errors and "cell N: message" lines.</param>
-    /// <param name="cancellationToken">Stops the run between cells.</param>
+    /// <param name="stdout">Receives output paths, check results and help text.</param>
+    /// <param name="stderr">Receives usage errors, load errors, progress lines and "cell N: message" lines.</param>
+    /// <param name="cancellationToken">Stops a run between cells.</param>
     /// <returns>0, 1 or 2 as documented on <see cref="RunnerApp"/>.</returns>
     public static async Task<int> RunAsync(string[] args, TextWriter stdout, TextWriter stderr,
         CancellationToken cancellationToken = default)
@@ -70,78 +101,19 @@ public static class RunnerApp
             return ExitSuccess;
         }
 
-        if (args[0] != "run")
+        if (args.Skip(1).Any(a => a is "--help" or "-h") && args[0] is "run" or "check" or "export")
         {
-            await stderr.WriteLineAsync($"algebra-notebook: unknown command '{args[0]}'. Try 'algebra-notebook --help'.").ConfigureAwait(false);
-            return ExitUsageError;
+            await stdout.WriteAsync(HelpText + Environment.NewLine).ConfigureAwait(false);
+            return ExitSuccess;
         }
 
-        string? notebook = null;
-        string? output = null;
-        TimeSpan? cellTimeout = null;
-        for (var i = 1; i < args.Length; i++)
+        return args[0] switch
         {
-            var arg = args[i];
-            if (arg is "--help" or "-h")
-            {
-                await stdout.WriteAsync(HelpText + Environment.NewLine).ConfigureAwait(false);
-                return ExitSuccess;
-            }
-
-            if (arg is "--output" or "-o")
-            {
-                if (i + 1 >= args.Length || string.IsNullOrWhiteSpace(args[i + 1]))
-                {
-                    await stderr.WriteLineAsync($"algebra-notebook run: option '{arg}' needs a file path.").ConfigureAwait(false);
-                    return ExitUsageError;
-                }
-
-                if (output is not null)
-                {
-                    await stderr.WriteLineAsync("algebra-notebook run: option '--output' was given twice.").ConfigureAwait(false);
-                    return ExitUsageError;
-                }
-
-                output = args[++i];
-            }
-            else if (arg == "--cell-timeout")
-            {
-                if (i + 1 >= args.Length
-                    || !double.TryParse(args[i + 1], System.Globalization.NumberStyles.Float,
-                        System.Globalization.CultureInfo.InvariantCulture, out var seconds)
-                    || !(seconds > 0) || seconds > TimeSpan.MaxValue.TotalSeconds / 2)
-                {
-                    var given = i + 1 < args.Length ? $"'{args[i + 1]}'" : "nothing";
-                    await stderr.WriteLineAsync($"algebra-notebook run: option '--cell-timeout' needs a positive number of seconds, got {given}.").ConfigureAwait(false);
-                    return ExitUsageError;
-                }
-
-                cellTimeout = TimeSpan.FromSeconds(seconds);
-                i++;
-            }
-            else if (arg.StartsWith('-') && arg.Length > 1)
-            {
-                await stderr.WriteLineAsync($"algebra-notebook run: unknown option '{arg}'.").ConfigureAwait(false);
-                return ExitUsageError;
-            }
-            else if (notebook is null)
-            {
-                notebook = arg;
-            }
-            else
-            {
-                await stderr.WriteLineAsync($"algebra-notebook run: unexpected extra argument '{arg}' (one notebook per run).").ConfigureAwait(false);
-                return ExitUsageError;
-            }
-        }
-
-        if (notebook is null)
-        {
-            await stderr.WriteLineAsync("algebra-notebook run: missing notebook path (.ipynb or .dib).").ConfigureAwait(false);
-            return ExitUsageError;
-        }
-
-        return await RunNotebookAsync(notebook, output, cellTimeout, stdout, stderr, cancellationToken).ConfigureAwait(false);
+            "run" => await RunCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
+            "check" => await CheckCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
+            "export" => await ExportCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
+            _ => await UsageError(stderr, $"algebra-notebook: unknown command '{args[0]}'. Try 'algebra-notebook --help'.").ConfigureAwait(false),
+        };
     }
 
     /// <summary>The default report path: the notebook's path with its extension replaced by .html.</summary>
@@ -149,52 +121,87 @@ public static class RunnerApp
     /// <returns>The report path.</returns>
     public static string DefaultReportPath(string notebookPath) => Path.ChangeExtension(notebookPath, ".html");
 
-    private static async Task<int> RunNotebookAsync(string notebookPath, string? outputPath, TimeSpan? cellTimeout,
-        TextWriter stdout, TextWriter stderr, CancellationToken cancellationToken)
+    private static async Task<int> UsageError(TextWriter stderr, string message)
     {
-        IReadOnlyList<NotebookCell> cells;
-        try
+        await stderr.WriteLineAsync(message).ConfigureAwait(false);
+        return ExitUsageError;
+    }
+
+    /// <summary>Reads the value after option <paramref name="index"/>; null (with the message written) when it is missing.</summary>
+    private static string? OptionValue(string[] args, ref int index, string command, string what, TextWriter stderr)
+    {
+        var option = args[index];
+        if (index + 1 >= args.Length || string.IsNullOrWhiteSpace(args[index + 1]))
         {
-            cells = NotebookFile.Load(notebookPath);
-        }
-        catch (NotebookLoadException e)
-        {
-            await stderr.WriteLineAsync(e.Message).ConfigureAwait(false);
-            return ExitUsageError;
+            stderr.WriteLine($"algebra-notebook {command}: option '{option}' needs {what}.");
+            return null;
         }
 
-        var reportPath = Path.GetFullPath(outputPath ?? DefaultReportPath(notebookPath));
-        var runDate = DateTimeOffset.UtcNow;
-        IReadOnlyList<CellResult> results;
-        using (var executor = new NotebookExecutor(cellTimeout))
+        return args[++index];
+    }
+
+    /// <summary>Parses a --cell-timeout value; null (with the message written) when it is not a positive number of seconds.</summary>
+    private static TimeSpan? ParseTimeout(string[] args, ref int index, string command, TextWriter stderr)
+    {
+        if (index + 1 >= args.Length
+            || !double.TryParse(args[index + 1], NumberStyles.Float, CultureInfo.InvariantCulture, out var seconds)
+            || !(seconds > 0) || seconds > TimeSpan.MaxValue.TotalSeconds / 2)
         {
-            results = await executor.RunAsync(cells, cancellationToken).ConfigureAwait(false);
+            var given = index + 1 < args.Length ? $"'{args[index + 1]}'" : "nothing";
+            stderr.WriteLine($"algebra-notebook {command}: option '--cell-timeout' needs a positive number of seconds, got {given}.");
+            return null;
         }
 
-        var html = HtmlReportWriter.Write(Path.GetFileName(notebookPath), runDate, results);
-        try
+        index++;
+        return TimeSpan.FromSeconds(seconds);
+    }
+
+    /// <summary>Progress lines "[3/12] cell 5 ... ok 0.4 s" on <paramref name="stderr"/>, or nothing when quiet.</summary>
+    private static Action<CellProgress>? ProgressWriter(TextWriter stderr, bool quiet)
+    {
+        if (quiet)
         {
-            var directory = Path.GetDirectoryName(reportPath);
-            if (!string.IsNullOrEmpty(directory))
+            return null;
+        }
+
+        return progress =>
+        {
+            if (progress.Result is null)
             {
-                Directory.CreateDirectory(directory);
+                stderr.Write($"[{progress.Position}/{progress.Total}] cell {progress.Cell.Number} ... ");
+            }
+            else
+            {
+                var seconds = progress.Elapsed.TotalSeconds.ToString("0.0", CultureInfo.InvariantCulture);
+                stderr.WriteLine($"{(progress.Result.Failed ? "failed" : "ok")} {seconds} s");
             }
 
-            await File.WriteAllTextAsync(reportPath, html, new UTF8Encoding(false), cancellationToken).ConfigureAwait(false);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            stderr.Flush();
+        };
+    }
+
+    /// <summary>Writes a text file through a temporary file in the same folder, so a failed write never leaves a half file.</summary>
+    private static async Task WriteFileAsync(string path, string text, CancellationToken cancellationToken)
+    {
+        var directory = Path.GetDirectoryName(path);
+        if (!string.IsNullOrEmpty(directory))
         {
-            await stderr.WriteLineAsync($"Report '{reportPath}' could not be written: {e.Message}").ConfigureAwait(false);
-            return ExitUsageError;
+            Directory.CreateDirectory(directory);
         }
 
-        foreach (var failed in results.Where(r => r.Failed))
+        var temporary = path + ".tmp-" + Guid.NewGuid().ToString("N");
+        try
         {
-            await stderr.WriteLineAsync($"cell {failed.Cell.Number}: {OneLine(failed.Failure!)}").ConfigureAwait(false);
+            await File.WriteAllTextAsync(temporary, text, new System.Text.UTF8Encoding(false), cancellationToken).ConfigureAwait(false);
+            File.Move(temporary, path, overwrite: true);
         }
-
-        await stdout.WriteLineAsync(reportPath).ConfigureAwait(false);
-        return results.Any(r => r.Failed) ? ExitCellFailed : ExitSuccess;
+        finally
+        {
+            if (File.Exists(temporary))
+            {
+                File.Delete(temporary);
+            }
+        }
     }
 
     private static string OneLine(string text) =>

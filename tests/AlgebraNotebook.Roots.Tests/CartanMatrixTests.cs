@@ -111,7 +111,7 @@ public class CartanMatrixTests
     }
 
     /// <summary>Orders of P/Q = det A: A_n n+1, B_n and C_n 2, D_n 4, E6 3, E7 2, E8, F4, G2 1
-    /// (Humphreys, Introduction to Lie Algebras, 13.1 and Exercise 13.5 / Table 1; Bourbaki Plates I-IX, item (VIII)).</summary>
+    /// (Bourbaki Plates I-IX, item (VIII); Humphreys, Introduction to Lie Algebras, ch. 13, section numbers from memory).</summary>
     private static int PublishedDeterminant(CartanFamily family, int n) => family switch
     {
         CartanFamily.A => n + 1,

@@ -26,7 +26,7 @@ public class CoxeterTableTests
         _ => [2, 6],
     };
 
-    /// <summary>Weyl group orders: A_n (n+1)!, B_n and C_n 2^n n!, D_n 2^(n-1) n! (Humphreys, Reflection Groups, 2.10 and Table 3.1);
+    /// <summary>Weyl group orders: A_n (n+1)!, B_n and C_n 2^n n!, D_n 2^(n-1) n! (family formulas: common practice; all equal the product of the degrees in Humphreys, Reflection Groups, Table 3.1);
     /// E6 51,840, E7 2,903,040, E8 696,729,600, F4 1152, G2 12 (Table 3.1; Bourbaki Plates V-IX).</summary>
     private static BigInteger PublishedOrder(CartanFamily family, int n) => family switch
     {
@@ -111,13 +111,13 @@ public class CoxeterTableTests
     {
         var system = RootSystem.Of(name);
 
-        // Humphreys, Reflection Groups 3.9: sum of exponents = number of positive roots; 3.18-3.19: largest degree = h,
+        // Humphreys, Reflection Groups, ch. 3 (section numbers from memory: 3.9, 3.18-3.19): sum of exponents = number of positive roots; largest degree = h,
         // and N = n h / 2 for irreducible W.
         Assert.Equal(system.NumberOfPositiveRoots, system.Exponents.Sum());
         Assert.Equal(system.CoxeterNumber, system.Degrees.Max());
         Assert.Equal(system.Rank * system.CoxeterNumber, 2 * system.NumberOfPositiveRoots);
 
-        // Exponents are symmetric: m_i + m_(n+1-i) = h (Humphreys, Reflection Groups 3.16).
+        // Exponents are symmetric: m_i + m_(n+1-i) = h (Humphreys, Reflection Groups, ch. 3, around 3.16; from memory).
         var e = system.Exponents;
         for (var i = 0; i < e.Count; i++)
         {
@@ -167,7 +167,7 @@ public class CoxeterTableTests
     [Fact]
     public void Weyl_group_order_of_A8_B8_D8_are_large_factorial_formulas()
     {
-        // A8: 9! = 362,880; B8: 2^8 8! = 10,321,920; D8: 2^7 8! = 5,160,960 (family formulas, Humphreys, Reflection Groups 2.10).
+        // A8: 9! = 362,880; B8: 2^8 8! = 10,321,920; D8: 2^7 8! = 5,160,960 (family formulas: common practice).
         Assert.Equal(new BigInteger(362_880), RootSystem.Of("A8").WeylGroup.Order);
         Assert.Equal(new BigInteger(10_321_920), RootSystem.Of("B8").WeylGroup.Order);
         Assert.Equal(new BigInteger(5_160_960), RootSystem.Of("D8").WeylGroup.Order);

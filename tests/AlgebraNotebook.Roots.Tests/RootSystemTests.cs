@@ -43,7 +43,7 @@ public class RootSystemTests
         Assert.Equal(PublishedMarks(t.Family, t.Rank), system.Marks);
         Assert.Equal(PublishedMarks(t.Family, t.Rank), system.HighestRoot.SimpleRootCoordinates);
 
-        // theta is long, dominant, and the Coxeter number is its height plus one (Humphreys, Reflection Groups 3.20).
+        // theta is long, dominant, and the Coxeter number is its height plus one (Humphreys, Reflection Groups, ch. 3, around 3.20; from memory).
         Assert.True(system.HighestRoot.IsLong);
         Assert.True(system.HighestRoot.AsWeight.IsDominant);
         Assert.Equal(system.CoxeterNumber, system.HighestRoot.Height + 1);
@@ -197,5 +197,28 @@ public class RootSystemTests
         Assert.Equal("(1, 0, 2)", new Weight(1, 0, 2).ToString());
         Assert.Equal("[2, 3, 4, 6, 5, 4, 3, 2]", e8.HighestRoot.ToString());
         Assert.Equal("()", default(Weight).ToString());
+    }
+
+    [Fact]
+    public void D2_is_accepted_but_treated_as_the_reducible_A1_plus_A1()
+    {
+        // D2 = A1+A1 (common practice): two orthogonal roots, so no single highest root.
+        var d2 = RootSystem.Of("D2");
+        Assert.False(d2.IsSimple);
+        Assert.Equal(2, d2.HighestRoots.Count);
+        var error = Assert.Throws<ExactArgumentException>(() => d2.HighestRoot);
+        Assert.Contains("D2 is isomorphic to A1+A1", error.Message);
+        Assert.Throws<ExactArgumentException>(() => d2.ExtendedDiagram);
+        Assert.Equal(2, d2.CoxeterNumber);
+        Assert.Equal(new[] { 1, 1 }, d2.Exponents);
+        Assert.Equal(new[] { "[1, 0]", "[0, 1]" }, d2.HighestRoots.Select(r => r.ToString()));
+    }
+
+    [Fact]
+    public void Ranks_above_the_limit_are_refused_with_the_rank_named()
+    {
+        var error = Assert.Throws<BeyondCapabilityException>(() => RootSystem.Of("A101"));
+        Assert.Contains("rank 101", error.Message);
+        Assert.Equal(100, RootSystem.MaximumRank);
     }
 }

@@ -78,7 +78,7 @@ public class WeylGroupTests
     private static string Key(int[,] m) => string.Join(",", m.Cast<int>());
 
     [Theory]
-    [InlineData("A3", 24)] // 4! (Humphreys, Reflection Groups 2.10)
+    [InlineData("A3", 24)] // 4! (common practice)
     [InlineData("B3", 48)] // 2^3 3!
     [InlineData("G2", 12)] // dihedral of order 12 (Table 3.1)
     [InlineData("D4", 192)] // 2^3 4!
@@ -91,7 +91,7 @@ public class WeylGroupTests
         Assert.Equal(published, elements.Count);
         Assert.Equal(new BigInteger(published), system.WeylGroup.Order);
 
-        // Breadth-first distance = length; the longest element is the unique element of length N (Humphreys, Reflection Groups 1.8).
+        // Breadth-first distance = length; the longest element is the unique element of length N (Humphreys, Reflection Groups 1.8, from memory).
         foreach (var word in elements.Values)
         {
             Assert.Equal(word.Length, system.WeylGroup.Length(word));
@@ -116,7 +116,7 @@ public class WeylGroupTests
         Assert.Equal(-system.Rho, system.WeylGroup.Apply(w0, system.Rho));
         Assert.Equal(w0.Length, system.WeylGroup.Length(w0));
 
-        // w0 = -1 exactly when every exponent is odd (Humphreys, Reflection Groups 3.19, common practice).
+        // w0 = -1 exactly when every exponent is odd (common practice; Humphreys, Reflection Groups, ch. 3, from memory).
         var allOdd = system.Exponents.All(m => m % 2 == 1);
         Assert.Equal(allOdd, system.FundamentalWeights.All(w => system.WeylGroup.Apply(w0, w) == -w));
     }
@@ -174,7 +174,7 @@ public class WeylGroupTests
             Assert.True(group.AreEqual(word, reduced), text);
             Assert.True(reduced.Length <= word.Length, text);
 
-            // Length parity is the sign of the element (Humphreys, Reflection Groups 1.6): l(w) = |word| mod 2.
+            // Length parity is the sign of the element (Humphreys, Reflection Groups 1.6, from memory): l(w) = |word| mod 2.
             Assert.True((word.Length - reduced.Length) % 2 == 0, text);
             Assert.True(group.Length(reduced) == reduced.Length, text);
             Assert.True(group.IsIdentity(group.Multiply(word, group.Inverse(word))), text);

@@ -1,3 +1,6 @@
+using System.Text.Json.Nodes;
+using AlgebraNotebook.Runner.Documents;
+
 namespace AlgebraNotebook.Runner.Tests;
 
 /// <summary>End-to-end runs through <see cref="RunnerApp.RunAsync"/> with a real in-process kernel (about 2 s each).</summary>
@@ -84,9 +87,10 @@ public class RunnerAppTests
             ("code", "System.Threading.Thread.Sleep(System.Threading.Timeout.Infinite);", null),
             ("code", "Console.WriteLine(\"after\");", null),
             ("markdown", "closing *prose*", null));
-        var (code, _, stderr) = await Run("run", path, "--cell-timeout", "1");
+        // 5 s, not 1 s: the first cell compiles cold (about 2 s measured) and a busy machine multiplies that.
+        var (code, _, stderr) = await Run("run", path, "--cell-timeout", "5");
         Assert.Equal(1, code);
-        Assert.Contains("cell 2: The cell did not finish within the time limit of 1 s.", stderr);
+        Assert.Contains("cell 2: The cell did not finish within the time limit of 5 s.", stderr);
         Assert.Contains("cell 3: Not run: cell 2 did not finish within its time limit", stderr);
         var html = File.ReadAllText(Path.Combine(temp.Folder, "slow.html"));
         Assert.Contains("<pre>before</pre>", html);
@@ -124,11 +128,132 @@ public class RunnerAppTests
     [InlineData(new[] { "run", "a.ipynb", "b.ipynb" }, "unexpected extra argument 'b.ipynb'")]
     [InlineData(new[] { "run", "a.ipynb", "--cell-timeout", "0" }, "option '--cell-timeout' needs a positive number of seconds, got '0'")]
     [InlineData(new[] { "run", "a.ipynb", "--cell-timeout" }, "option '--cell-timeout' needs a positive number of seconds, got nothing")]
+    [InlineData(new[] { "check" }, "missing notebook path (.ipynb)")]
+    [InlineData(new[] { "check", "a.ipynb", "--fast" }, "unknown option '--fast'")]
+    [InlineData(new[] { "export", "a.ipynb" }, "missing '--format html' or '--format latex'")]
+    [InlineData(new[] { "export", "a.ipynb", "--format", "pdf" }, "unknown format 'pdf'; expected 'html' or 'latex'")]
+    [InlineData(new[] { "export", "a.ipynb", "--format" }, "option '--format' needs 'html' or 'latex'")]
     public async Task Usage_errors_give_exit_code_2_and_say_what_is_wrong(string[] args, string expected)
     {
         var (code, _, stderr) = await Run(args);
         Assert.Equal(2, code);
         Assert.Contains(expected, stderr);
+    }
+
+    [Fact]
+    public async Task Run_writes_the_notebook_back_and_check_confirms_it_reproduces_until_an_output_is_edited()
+    {
+        using var temp = new TempNotebook();
+        var input = temp.WriteIpynb("derivation.ipynb",
+            ("markdown", "# Rotation generator", null),
+            ("code", "var a = Matrix.ParseRational(\"[[2, 1], [1, 2]]\");\nConsole.WriteLine(\"trace \" + a.Trace());\na", "csharp"),
+            ("code", "Eigenvalues.OverRationals(a)", "csharp"),
+            ("code", "Console.WriteLine(Guid.NewGuid());", "csharp"),
+            ("code", "throw new InvalidOperationException(\"deliberate\");", "csharp"));
+        // Cell 4 prints a fresh value each run: declared volatile, so check must not compare it.
+        var root = JsonNode.Parse(File.ReadAllText(input))!;
+        root["cells"]![3]!["metadata"]!["algebranotebook"] = new JsonObject { ["volatile"] = true };
+        temp.WriteJson("derivation.ipynb", root);
+        var inputText = File.ReadAllText(input);
+        var written = Path.Combine(temp.Folder, "derivation.run.ipynb");
+
+        var (code, stdout, stderr) = await Run("run", input, "--write-notebook", written);
+        Assert.Equal(1, code);
+        Assert.Contains("cell 5: System.InvalidOperationException: deliberate", stderr);
+        Assert.Contains("[1/4] cell 2 ... ok ", stderr);
+        Assert.Contains("[4/4] cell 5 ... failed ", stderr);
+        Assert.Equal(new[] { Path.Combine(temp.Folder, "derivation.html"), written }, stdout.Trim().Split(Environment.NewLine));
+        // The input is never overwritten without --in-place.
+        Assert.Equal(inputText, File.ReadAllText(input));
+
+        var json = File.ReadAllText(written);
+        // Required keys and id pattern: nbformat 4.5 JSON schema (jupyter/nbformat).
+        Assert.Empty(NbformatStructure.Problems(json));
+        var cells = NotebookFile.Load(written);
+        Assert.Equal(NotebookFile.Load(input).Select(c => (c.Kind, c.Source)), cells.Select(c => (c.Kind, c.Source)));
+        var stored = StoredNotebook.Load(written);
+        Assert.Equal(new[] { "cell-1", "cell-2", "cell-3", "cell-4", "cell-5" }, stored.Cells.Select(c => c.Id));
+        Assert.Equal(new int?[] { null, 1, 2, 3, 4 }, stored.Cells.Select(c => c.ExecutionCount));
+        // The eigen-decomposition is stored as MathML (a table inside <math>) plus its plain text.
+        var eigen = stored.Cells[2].Outputs.Single();
+        Assert.Equal("execute_result", eigen.OutputType);
+        Assert.Contains("<math", eigen.Data["text/html"]);
+        Assert.Contains("<mtext>eigenspace basis</mtext>", eigen.Data["text/html"]);
+        Assert.StartsWith("[[eigenvalue, algebraic multiplicity, eigenspace basis], [1, 1, ", eigen.Data["text/plain"]);
+        Assert.Equal("trace 4\n", stored.Cells[1].Outputs[0].Text);
+        Assert.Equal(("System.InvalidOperationException", "deliberate"), (stored.Cells[4].Outputs.Single().ErrorName, stored.Cells[4].Outputs.Single().ErrorValue));
+
+        (code, stdout, stderr) = await Run("check", written, "--quiet");
+        Assert.True(code == 0, $"exit {code}; stdout: {stdout}; stderr: {stderr}");
+        Assert.Equal("check: 3 code cells compared, 1 volatile cell skipped: every output reproduces.", stdout.Trim());
+        Assert.Equal(string.Empty, stderr);
+
+        // Someone edits a stored result by hand: check must notice and show where.
+        var edited = JsonNode.Parse(json)!;
+        edited["cells"]![1]!["outputs"]![1]!["data"]!["text/plain"] = new JsonArray("[[2, 1], [1, 3]]");
+        temp.WriteJson("derivation.run.ipynb", edited);
+        (code, stdout, _) = await Run("check", written, "-q");
+        Assert.Equal(1, code);
+        Assert.Contains("cell 2 differs:\n--- stored outputs of cell 2\n+++ outputs of this run\n", stdout.Replace("\r\n", "\n"));
+        Assert.Contains("\n-[[2, 1], [1, 3]]\n+[[2, 1], [1, 2]]\n", stdout.Replace("\r\n", "\n"));
+        Assert.EndsWith("1 differs (cell 2).", stdout.Trim());
+    }
+
+    [Fact]
+    public async Task In_place_saves_the_outputs_into_the_input_notebook_keeping_its_ids()
+    {
+        using var temp = new TempNotebook();
+        var path = temp.WriteIpynb("inplace.ipynb", ("code", "Rational.Parse(\"1/3\") + Rational.Parse(\"1/6\")", "csharp"));
+        var (code, stdout, stderr) = await Run("run", path, "--in-place", "--quiet");
+        Assert.True(code == 0, $"exit {code}; stderr: {stderr}");
+        Assert.Equal(string.Empty, stderr);
+        Assert.EndsWith(path, stdout.Trim());
+        var stored = StoredNotebook.Load(path);
+        Assert.Equal("cell-1", stored.Cells[0].Id);
+        // 1/3 + 1/6 = 1/2 (common practice).
+        Assert.Equal("1/2", stored.Cells[0].Outputs.Single().Data["text/plain"]);
+        Assert.Empty(Directory.GetFiles(temp.Folder, "*.tmp-*"));
+    }
+
+    [Fact]
+    public async Task Check_of_a_notebook_without_stored_outputs_exits_2_and_says_to_run_it_first()
+    {
+        using var temp = new TempNotebook();
+        var path = temp.WriteIpynb("fresh.ipynb", ("markdown", "# Fresh", null), ("code", "1 + 1", null));
+        var (code, _, stderr) = await Run("check", path);
+        Assert.Equal(2, code);
+        Assert.Contains($"Notebook '{path}' has no stored outputs; nothing to compare: run it with --write-notebook first.", stderr);
+    }
+
+    [Fact]
+    public async Task Check_of_a_missing_notebook_or_a_dib_file_exits_2_with_the_file_named()
+    {
+        var missing = Path.Combine(Path.GetTempPath(), "absent-" + Guid.NewGuid().ToString("N") + ".ipynb");
+        var (code, _, stderr) = await Run("check", missing);
+        Assert.Equal(2, code);
+        Assert.Contains($"Notebook '{missing}' was not found.", stderr);
+
+        using var temp = new TempNotebook();
+        var dib = temp.WriteText("a.dib", "#!csharp\n\n1 + 1\n");
+        (code, _, stderr) = await Run("check", dib);
+        Assert.Equal(2, code);
+        Assert.Contains("is a .dib file, which stores no outputs; nothing to compare: run it with --write-notebook", stderr);
+    }
+
+    [Fact]
+    public async Task In_place_needs_an_ipynb_input_and_excludes_write_notebook()
+    {
+        using var temp = new TempNotebook();
+        var dib = temp.WriteText("a.dib", "#!csharp\n\n1 + 1\n");
+        var (code, _, stderr) = await Run("run", dib, "--in-place");
+        Assert.Equal(2, code);
+        Assert.Contains("'--in-place' needs an .ipynb notebook", stderr);
+        (code, _, stderr) = await Run("run", "a.ipynb", "--in-place", "--write-notebook", "b.ipynb");
+        Assert.Equal(2, code);
+        Assert.Contains("give either '--write-notebook <path>' or '--in-place', not both", stderr);
+        (code, _, stderr) = await Run("run", "a.ipynb", "--write-notebook", "b.json");
+        Assert.Equal(2, code);
+        Assert.Contains("'b.json', must end in .ipynb", stderr);
     }
 
     [Fact]
@@ -138,5 +263,8 @@ public class RunnerAppTests
         Assert.Equal(0, code);
         Assert.Contains("algebra-notebook run <notebook.ipynb|notebook.dib> [--output <report.html>]", stdout);
         Assert.Contains("Exit codes: 0", stdout);
+        Assert.Contains("algebra-notebook check <notebook.ipynb>", stdout);
+        Assert.Contains("algebra-notebook export <notebook.ipynb> --format html|latex [--output <file>]", stdout);
+        Assert.Contains("--write-notebook <path>", stdout);
     }
 }

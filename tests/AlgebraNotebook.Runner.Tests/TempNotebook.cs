@@ -52,6 +52,9 @@ internal sealed class TempNotebook : IDisposable
         return WriteText(fileName, JsonSerializer.Serialize(json, new JsonSerializerOptions { WriteIndented = true }));
     }
 
+    public string WriteJson(string fileName, System.Text.Json.Nodes.JsonNode json) =>
+        WriteText(fileName, json.ToJsonString(new JsonSerializerOptions { WriteIndented = true }));
+
     public void Dispose()
     {
         try

@@ -1,5 +1,6 @@
 using System.Collections.Concurrent;
 using System.Reflection;
+using AlgebraNotebook.Display.Lie;
 using AlgebraNotebook.Display.Tree;
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Matrices;
@@ -7,6 +8,7 @@ using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Series;
 using AlgebraNotebook.Exact.Symbols;
+using AlgebraNotebook.Roots;
 
 namespace AlgebraNotebook.Display.Conversion;
 
@@ -34,6 +36,12 @@ internal static class ConverterRegistry
         AddGeneric(typeof(Matrix<>), Method(typeof(MatrixConverters), nameof(MatrixConverters.FromMatrix)));
         AddGeneric(typeof(UnivariatePolynomial<>), Method(typeof(MatrixConverters), nameof(MatrixConverters.FromUnivariatePolynomial)));
         AddGeneric(typeof(TruncatedSeries<>), Method(typeof(SeriesConverters), nameof(SeriesConverters.FromTruncatedSeries)));
+
+        // Roots layer (converters in Display/Lie).
+        AddExact<Weight>(WeightDisplay.ToTree);
+        AddExact<Root>(RootDisplay.ToTree);
+        AddExact<SimpleCartanType>(CartanTypeDisplay.ToTree);
+        AddExact<CartanType>(CartanTypeDisplay.ToTree);
     }
 
     private static MethodInfo Method(Type host, string name) =>

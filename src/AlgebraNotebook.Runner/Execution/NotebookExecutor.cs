@@ -18,7 +18,7 @@ namespace AlgebraNotebook.Runner.Execution;
 /// <remarks>
 /// Cells run in document order. A failing cell does not stop the run: later cells still execute (they may fail in turn
 /// if they depend on the failed one). Outputs prefer text/html and fall back to text/plain. Calling
-/// <see cref="RunAsync"/> again continues in the same kernel, with the variables of the earlier run still defined.
+/// <see cref="RunAsync(IReadOnlyList{NotebookCell}, CancellationToken)"/> again continues in the same kernel, with the variables of the earlier run still defined.
 /// </remarks>
 public sealed class NotebookExecutor : IDisposable
 {
@@ -54,21 +54,46 @@ public sealed class NotebookExecutor : IDisposable
     /// <param name="cancellationToken">Stops before the next cell when cancelled.</param>
     /// <returns>The results, in the same order as <paramref name="cells"/>.</returns>
     /// <exception cref="InvalidOperationException">The prelude of using directives failed to compile (a build problem, not a notebook problem).</exception>
-    public async Task<IReadOnlyList<CellResult>> RunAsync(IReadOnlyList<NotebookCell> cells, CancellationToken cancellationToken = default)
+    public Task<IReadOnlyList<CellResult>> RunAsync(IReadOnlyList<NotebookCell> cells, CancellationToken cancellationToken = default) =>
+        RunAsync(cells, null, cancellationToken);
+
+    /// <summary>
+    /// Runs every code cell in order, like <see cref="RunAsync(IReadOnlyList{NotebookCell}, CancellationToken)"/>, and
+    /// reports each C# code cell to <paramref name="progress"/> twice, synchronously on the running thread: when it
+    /// starts (<see cref="CellProgress.Result"/> null) and when it has finished.
+    /// </summary>
+    /// <param name="cells">The notebook cells in document order.</param>
+    /// <param name="progress">Called before and after each C# code cell; null for no reports.</param>
+    /// <param name="cancellationToken">Stops before the next cell when cancelled.</param>
+    /// <returns>The results, in the same order as <paramref name="cells"/>.</returns>
+    /// <exception cref="InvalidOperationException">The prelude of using directives failed to compile (a build problem, not a notebook problem).</exception>
+    public async Task<IReadOnlyList<CellResult>> RunAsync(IReadOnlyList<NotebookCell> cells, Action<CellProgress>? progress,
+        CancellationToken cancellationToken = default)
     {
         ArgumentNullException.ThrowIfNull(cells);
         await PrepareAsync().ConfigureAwait(false);
         var results = new List<CellResult>(cells.Count);
+        var total = cells.Count(c => c.Kind == CellKind.Code);
+        var position = 0;
         foreach (var cell in cells)
         {
             cancellationToken.ThrowIfCancellationRequested();
-            results.Add(cell.Kind switch
+            if (cell.Kind != CellKind.Code)
             {
-                CellKind.Markdown or CellKind.Raw => CellResult.Prose(cell),
-                CellKind.Unsupported => new CellResult(cell, Array.Empty<CellOutput>(),
-                    $"The runner executes only C# cells; this cell's language is '{cell.Language}'."),
-                _ => await RunCodeCellAsync(cell).ConfigureAwait(false),
-            });
+                results.Add(cell.Kind == CellKind.Unsupported
+                    ? new CellResult(cell, Array.Empty<CellOutput>(),
+                        $"The runner executes only C# cells; this cell's language is '{cell.Language}'.")
+                    : CellResult.Prose(cell));
+                continue;
+            }
+
+            position++;
+            progress?.Invoke(new CellProgress(position, total, cell, null, TimeSpan.Zero));
+            var watch = System.Diagnostics.Stopwatch.StartNew();
+            var result = await RunCodeCellAsync(cell).ConfigureAwait(false);
+            watch.Stop();
+            progress?.Invoke(new CellProgress(position, total, cell, result, watch.Elapsed));
+            results.Add(result);
         }
 
         return results;
@@ -207,6 +232,6 @@ public sealed class NotebookExecutor : IDisposable
             return;
         }
 
-        outputs.Add(new CellOutput(kind, mime, text));
+        outputs.Add(new CellOutput(kind, mime, text) { PlainContent = mime == CellOutput.Html ? plain?.Value : null });
     }
 }

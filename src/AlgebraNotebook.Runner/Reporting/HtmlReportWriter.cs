@@ -54,12 +54,15 @@ public static class HtmlReportWriter
     /// <param name="title">Report title, usually the notebook file name (escaped).</param>
     /// <param name="runDate">When the run happened; written in UTC as yyyy-MM-dd HH:mm:ss.</param>
     /// <param name="results">The cells and their results, in document order.</param>
+    /// <param name="dateLabel">The words before the date in the header: "Run on" for a run, something like
+    /// "Outputs stored in the notebook, saved on" for a report made from stored outputs.</param>
     /// <returns>The HTML document text.</returns>
     /// <exception cref="ArgumentNullException">An argument is null.</exception>
-    public static string Write(string title, DateTimeOffset runDate, IReadOnlyList<CellResult> results)
+    public static string Write(string title, DateTimeOffset runDate, IReadOnlyList<CellResult> results, string dateLabel = "Run on")
     {
         ArgumentNullException.ThrowIfNull(title);
         ArgumentNullException.ThrowIfNull(results);
+        ArgumentNullException.ThrowIfNull(dateLabel);
         var failures = results.Count(r => r.Failed);
         var codeCells = results.Count(r => r.Cell.Kind is CellKind.Code or CellKind.Unsupported);
         var html = new StringBuilder();
@@ -70,7 +73,7 @@ public static class HtmlReportWriter
             .Append("<style>\n").Append(Stylesheet).Append("\n</style>\n</head>\n<body>\n<main>\n");
 
         html.Append("<header class=\"report\">\n<h1>").Append(HtmlText.Escape(title)).Append("</h1>\n")
-            .Append("<p>Run on ")
+            .Append("<p>").Append(HtmlText.Escape(dateLabel)).Append(' ')
             .Append(HtmlText.Escape(runDate.ToUniversalTime().ToString("yyyy-MM-dd HH:mm:ss", CultureInfo.InvariantCulture)))
             .Append(" UTC &middot; ").Append(results.Count).Append(" cells, ").Append(codeCells).Append(" code cells</p>\n")
             .Append(failures == 0

@@ -53,6 +53,24 @@ public class AlgebraNotebookFormattersTests
     }
 
     [Fact]
+    public void Results_of_exact_computations_are_registered_and_formatted_as_mathml()
+    {
+        // The registration covers every public type of the mathematics assemblies, so the display converters of
+        // eigen-decompositions, solution sets and quotient rings take effect without a change in the notebook layer.
+        Assert.Contains(typeof(EigenDecomposition<>), AlgebraNotebookFormatters.RegisteredTypes);
+        Assert.Contains(typeof(SolutionSet<>), AlgebraNotebookFormatters.RegisteredTypes);
+        Assert.Contains(typeof(QuotientRing<>), AlgebraNotebookFormatters.RegisteredTypes);
+        Assert.Contains(typeof(GroebnerStatistics), AlgebraNotebookFormatters.RegisteredTypes);
+        var decomposition = Eigenvalues.OverRationals(Matrix.ParseRational("[[2, 1], [1, 2]]"));
+        var html = decomposition.ToDisplayString(AlgebraNotebookFormatters.HtmlMimeType);
+        Assert.Equal(MathDisplay.ToHtml(decomposition), html);
+        Assert.Contains("<mtext>eigenspace basis</mtext>", html);
+        Assert.Equal(MathDisplay.ToPlainText(decomposition), decomposition.ToDisplayString(AlgebraNotebookFormatters.PlainTextMimeType));
+        var ring = new QuotientRing<Rational>(["c^2 + s^2 = 1"]);
+        Assert.Contains("<math", ring.ToDisplayString(AlgebraNotebookFormatters.HtmlMimeType));
+    }
+
+    [Fact]
     public void Display_tree_nodes_are_formatted_through_MathDisplay()
     {
         var node = MathNodes.Symbol("x");

@@ -1,0 +1,72 @@
+using AlgebraNotebook.Exact;
+
+namespace AlgebraNotebook.Groups.Series;
+
+/// <summary>
+/// Size cap for the series computations, which work in the free associative algebra truncated after degree N: that
+/// algebra has k + k^2 + ... + k^N words on k generators. A request above <see cref="MaxAssociativeWords"/> is refused
+/// with a <see cref="BeyondCapabilityException"/> that states the estimated size, instead of running for hours.
+/// </summary>
+public sealed class SeriesLimits
+{
+    /// <summary>The default cap: 2^18 = 262,144 words (degree 17 on two generators, degree 11 on three).</summary>
+    public static SeriesLimits Default { get; } = new(1 << 18);
+
+    /// <summary>Creates a cap.</summary>
+    /// <exception cref="ExactArgumentException">The cap is below 1.</exception>
+    public SeriesLimits(long maxAssociativeWords)
+    {
+        if (maxAssociativeWords < 1)
+        {
+            throw new ExactArgumentException($"The word cap {maxAssociativeWords} must be at least 1.", nameof(maxAssociativeWords));
+        }
+
+        MaxAssociativeWords = maxAssociativeWords;
+    }
+
+    /// <summary>The largest number of words k + k^2 + ... + k^N accepted.</summary>
+    public long MaxAssociativeWords { get; }
+
+    /// <summary>k + k^2 + ... + k^N (saturating at long.MaxValue).</summary>
+    public static long AssociativeWords(int generators, int degree)
+    {
+        long total = 0;
+        long power = 1;
+        for (var d = 1; d <= degree; d++)
+        {
+            if (power > long.MaxValue / generators)
+            {
+                return long.MaxValue;
+            }
+
+            power *= generators;
+            if (total > long.MaxValue - power)
+            {
+                return long.MaxValue;
+            }
+
+            total += power;
+        }
+
+        return total;
+    }
+
+    internal void Check(string what, int generators, int degree)
+    {
+        if (degree < 1)
+        {
+            throw new ExactArgumentException($"The degree of the {what} must be at least 1, not {degree}.", nameof(degree));
+        }
+
+        var words = AssociativeWords(generators, degree);
+        if (degree > FreeLie.Word.MaxLength || words > MaxAssociativeWords)
+        {
+            var size = words == long.MaxValue ? "more than 9.2e18" : words.ToString("N0", System.Globalization.CultureInfo.InvariantCulture);
+            throw new BeyondCapabilityException(
+                $"The {what} to degree {degree} on {generators} generators needs the free associative algebra truncated at degree {degree}: " +
+                $"{size} words, above the cap of {MaxAssociativeWords.ToString("N0", System.Globalization.CultureInfo.InvariantCulture)} words" +
+                (degree > FreeLie.Word.MaxLength ? $" (and words are limited to {FreeLie.Word.MaxLength} letters)" : string.Empty) +
+                ". Lower the degree or pass a larger SeriesLimits.");
+        }
+    }
+}

@@ -1,0 +1,156 @@
+using System.Numerics;
+using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Scalars;
+
+namespace AlgebraNotebook.Roots.Representations;
+
+public sealed partial class IrreducibleRepresentation
+{
+    /// <summary>
+    /// The dual (contragredient) representation, with highest weight -w0(lambda): the dominant representative of -lambda
+    /// under the Weyl group (w0 the longest element).
+    /// </summary>
+    public IrreducibleRepresentation Dual
+    {
+        get
+        {
+            var negated = _labels.Select(x => -x).ToArray();
+            Geometry.ToDominantInPlace(negated);
+            return new IrreducibleRepresentation(System, negated);
+        }
+    }
+
+    /// <summary>True when V(lambda) is isomorphic to its dual, i.e. -w0(lambda) = lambda.</summary>
+    public bool IsSelfDual => Dual.Equals(this);
+
+    /// <summary>
+    /// Real, pseudo-real or complex. Criterion: V(lambda) is complex unless -w0(lambda) = lambda; a self-dual V(lambda)
+    /// carries an invariant bilinear form that is symmetric (real) when &lt;lambda, 2 rho^vee&gt; is even and antisymmetric
+    /// (pseudo-real) when it is odd, where 2 rho^vee is the sum of the positive coroots (Bourbaki, Lie Groups and Lie
+    /// Algebras, ch. VIII, section 7.5, Prop. 12; common practice). For a semisimple algebra the parity is additive over the
+    /// simple factors, so the same test applies to the whole highest weight.
+    /// </summary>
+    public Reality Reality
+    {
+        get
+        {
+            if (!IsSelfDual)
+            {
+                return Reality.Complex;
+            }
+
+            return Geometry.HeightPairing(_labels) % 2 == 0 ? Reality.Real : Reality.PseudoReal;
+        }
+    }
+
+    /// <summary>
+    /// The congruence class of the highest weight in P/Q (weight lattice modulo root lattice), as computed by
+    /// <see cref="RootSystem.CongruenceClass(Weight)"/>; every weight of V(lambda) lies in this class.
+    /// </summary>
+    public CongruenceClass CongruenceClass => System.CongruenceClass(HighestWeight);
+
+    /// <summary>The pairing &lt;lambda, 2 rho^vee&gt; (sum over positive roots of &lt;lambda, beta^vee&gt;) used by <see cref="Reality"/>.</summary>
+    public long PairingWithTwiceRhoCheck => Geometry.HeightPairing(_labels);
+
+    /// <summary>
+    /// The irreducible factors of V(lambda) over the simple factors of a semisimple algebra (V(lambda) is their outer tensor
+    /// product), one per component of <see cref="RootSystem.Components"/>, in that order. A simple algebra has one factor: this representation.
+    /// </summary>
+    public IReadOnlyList<IrreducibleRepresentation> ComponentFactors
+    {
+        get
+        {
+            if (System.Components.Count <= 1)
+            {
+                return [this];
+            }
+
+            var result = new IrreducibleRepresentation[System.Components.Count];
+            for (var k = 0; k < result.Length; k++)
+            {
+                var component = System.Components[k];
+                var offset = System.ComponentOffsets[k];
+                result[k] = new IrreducibleRepresentation(component, _labels.Skip(offset).Take(component.Rank).ToArray());
+            }
+
+            return result;
+        }
+    }
+
+    /// <summary>
+    /// The eigenvalue of the quadratic Casimir element on V(lambda).
+    /// <see cref="CasimirNormalisation.Physics"/>: C2 = (lambda, lambda + 2 rho) / 2 with long roots of squared length 2
+    /// (adjoint: dual Coxeter number; su(N) fundamental: (N^2 - 1) / (2N)).
+    /// <see cref="CasimirNormalisation.Killing"/>: with respect to the Killing form, the physics value of each simple factor
+    /// divided by its dual Coxeter number (adjoint of a simple algebra: 1).
+    /// For a semisimple algebra the value is the sum over the simple factors.
+    /// </summary>
+    /// <param name="normalisation">Which invariant form normalises the Casimir element.</param>
+    public Rational QuadraticCasimir(CasimirNormalisation normalisation = CasimirNormalisation.Physics)
+    {
+        var total = Rational.Zero;
+        foreach (var factor in ComponentFactors)
+        {
+            var c2 = factor.PhysicsCasimirOfSimple();
+            total += normalisation switch
+            {
+                CasimirNormalisation.Physics => c2,
+                CasimirNormalisation.Killing => c2 / factor.Geometry.DualCoxeterNumber(0),
+                _ => throw new ExactArgumentException($"Unknown Casimir normalisation {normalisation}.", nameof(normalisation)),
+            };
+        }
+
+        return total;
+    }
+
+    private Rational PhysicsCasimirOfSimple()
+    {
+        var shifted = _labels.Select(x => x + 2).ToArray();
+        return Geometry.InnerProduct(_labels, shifted) / 2;
+    }
+
+    /// <summary>
+    /// The second-order (Dynkin) index l(lambda) = dim(lambda) C2(lambda) / dim(g) of a representation of a SIMPLE algebra,
+    /// with C2 in the physics normalisation; <see cref="IndexConvention.Physics"/> gives 1/2 for the su(N) fundamental and N
+    /// for the adjoint, <see cref="IndexConvention.Dynkin"/> twice that (Slansky's tables, su(N) fundamental = 1).
+    /// Throws <see cref="ExactArgumentException"/> for a semisimple algebra; use <see cref="DynkinIndexOfComponent"/>.
+    /// </summary>
+    /// <param name="convention">Which normalisation of the index.</param>
+    public Rational DynkinIndex(IndexConvention convention = IndexConvention.Physics)
+    {
+        if (System.Components.Count != 1)
+        {
+            throw new ExactArgumentException(
+                $"The Dynkin index is defined per simple factor; {System.Type} has {System.Components.Count}. Use DynkinIndexOfComponent.",
+                nameof(convention));
+        }
+
+        return DynkinIndexOfComponent(0, convention);
+    }
+
+    /// <summary>
+    /// The index of V(lambda) restricted to the simple factor <paramref name="component"/> (zero-based, in the order of
+    /// <see cref="RootSystem.Components"/>): dim(V) / dim(V_k) times the index of the factor V_k, in the given convention.
+    /// </summary>
+    /// <param name="component">Zero-based simple factor.</param>
+    /// <param name="convention">Which normalisation of the index.</param>
+    public Rational DynkinIndexOfComponent(int component, IndexConvention convention = IndexConvention.Physics)
+    {
+        var factors = ComponentFactors;
+        if (component < 0 || component >= factors.Count)
+        {
+            throw new ExactArgumentException(
+                $"Component {component} does not exist: {System.Type} has {factors.Count} simple factor(s), numbered from 0.", nameof(component));
+        }
+
+        var factor = factors[component];
+        var index = new Rational(Dimension, factor.Dimension) * factor.Dimension * factor.PhysicsCasimirOfSimple()
+            / factor.Geometry.AlgebraDimension;
+        return convention switch
+        {
+            IndexConvention.Physics => index,
+            IndexConvention.Dynkin => 2 * index,
+            _ => throw new ExactArgumentException($"Unknown index convention {convention}.", nameof(convention)),
+        };
+    }
+}
