@@ -26,6 +26,45 @@ public sealed class ExponentialCoordinates<T>
         Series = series;
     }
 
+    /// <summary>
+    /// For a word expansion: the result as a combination of nested commutators of the generator NAMES in the free Lie
+    /// algebra (Lyndon basis, standard bracketing), where each letter stands for its parameter times its matrix (see
+    /// <see cref="NestedCommutatorText"/> for the parameters written out). Null when not available; <see cref="NestedCommutatorNote"/> says why.
+    /// </summary>
+    public FreeLie.LieSeries? NestedCommutators { get; private set; }
+
+    /// <summary>How <see cref="NestedCommutators"/> is to be read, or why it is missing.</summary>
+    public string NestedCommutatorNote { get; private set; } = "not computed: the coordinates did not come from a word of named generators";
+
+    /// <summary>
+    /// The nested-commutator form with the parameter monomial of each term written out, grouped by order:
+    /// "s*t [L_x, L_y] - 1/2*s^2*t [L_x, [L_x, L_y]] + ... + O(order 4)"; null when <see cref="NestedCommutators"/> is null.
+    /// </summary>
+    public string? NestedCommutatorText { get; private set; }
+
+    internal void SetNestedCommutators(FreeLie.LieSeries? series, IReadOnlyDictionary<string, Symbol>? parameterOf, string note)
+    {
+        NestedCommutators = series;
+        NestedCommutatorNote = note;
+        if (series is null || parameterOf is null)
+        {
+            return;
+        }
+
+        var algebra = series.Algebra;
+        var parts = new List<string>();
+        foreach (var (word, coefficient) in series.Terms)
+        {
+            var letters = word.Word.ToArray().Select(i => parameterOf[algebra.Generators[i]]);
+            var monomial = Monomial.FromFactors(letters.GroupBy(p => p).Select(g => (g.Key, g.Count())));
+            var c = coefficient.IsOne ? "" : coefficient == Rational.MinusOne ? "-" : coefficient + "*";
+            parts.Add($"{c}{monomial} {algebra.FormatBasisElement(word)}");
+        }
+
+        var text = parts.Count == 0 ? "0" : string.Join(" + ", parts).Replace("+ -", "- ", StringComparison.Ordinal);
+        NestedCommutatorText = $"{text} + O(order {Order})";
+    }
+
     /// <summary>The word, e.g. "exp(s A) exp(t B) exp(-s A) exp(-t B)".</summary>
     public string Word { get; }
 
@@ -146,7 +185,11 @@ public sealed class ExponentialCoordinates<T>
             text.Append('0');
         }
 
-        text.Append($"; + O(order {Order}) (matrix form: the nested-commutator form needs the free Lie algebra layer)");
+        text.Append($"; + O(order {Order})");
+        if (NestedCommutatorText is not null)
+        {
+            text.Append("; as nested commutators: ").Append(NestedCommutatorText);
+        }
         return text.ToString();
     }
 }

@@ -14,8 +14,11 @@ namespace AlgebraNotebook.Groups.Exponential;
 /// </summary>
 /// <remarks>
 /// Everything is exact below the order. Cost: for k parameters and order N each series has at most C(N + k - 1, k) terms;
-/// a word of w factors of n x n matrices costs about (w + N) n^3 series products. The result is in matrix form; it can be
-/// written in a basis of the algebra (<see cref="ExponentialCoordinates{T}.InBasis"/>).
+/// a word of w factors of n x n matrices costs about (w + N) n^3 series products. The result is in matrix form (it can be
+/// written in a basis of the algebra with <see cref="ExponentialCoordinates{T}.InBasis"/>) and, when every generator name
+/// carries one matrix and one parameter, also as nested commutators of the generator names in the free Lie algebra
+/// (<see cref="ExponentialCoordinates{T}.NestedCommutators"/>), computed independently by the Baker-Campbell-Hausdorff
+/// machinery of the free Lie layer.
 /// </remarks>
 public static class WordExpansion
 {
@@ -51,7 +54,55 @@ public static class WordExpansion
         }
 
         var log = SeriesMatrices.LogOnePlus(product - Matrix<TruncatedSeries<T>>.Identity(n), order);
-        return Coordinates(string.Join(" ", word.Select(f => f.ToString())), log, order, parameters);
+        var coordinates = Coordinates(string.Join(" ", word.Select(f => f.ToString())), log, order, parameters);
+        var (lie, parameterOf, note) = NestedCommutators(word, order);
+        coordinates.SetNestedCommutators(lie, parameterOf, note);
+        return coordinates;
+    }
+
+    /// <summary>
+    /// The same expansion in the free Lie algebra on the generator names (Lyndon basis, standard bracketing), by the
+    /// Baker-Campbell-Hausdorff machinery of <see cref="Series.BakerCampbellHausdorff.ProductOfExponentials"/>. Each
+    /// letter stands for its parameter times its matrix, so a term c [A, [A, B]] means c s^2 t [A, [A, B]] when A comes
+    /// with s and B with t. Needs every name to carry one matrix and one parameter.
+    /// </summary>
+    private static (FreeLie.LieSeries? Series, IReadOnlyDictionary<string, AlgebraNotebook.Exact.Symbols.Symbol>? ParameterOf, string Note) NestedCommutators<T>(IReadOnlyList<WordFactor<T>> word, int order)
+        where T : IFieldElement<T>
+    {
+        if (order < 2)
+        {
+            return (null, null, "order 1 keeps no terms, so there are no commutators to show");
+        }
+
+        var names = new List<string>();
+        var seen = new Dictionary<string, WordFactor<T>>(StringComparer.Ordinal);
+        foreach (var f in word)
+        {
+            if (seen.TryGetValue(f.Name, out var first))
+            {
+                if (!first.Generator.Equals(f.Generator) || !first.Parameter.Equals(f.Parameter))
+                {
+                    return (null, null, $"the name {f.Name} is used with two different matrices or parameters, so its letters would be ambiguous");
+                }
+            }
+            else
+            {
+                seen[f.Name] = f;
+                names.Add(f.Name);
+            }
+        }
+
+        try
+        {
+            var algebra = new FreeLie.FreeLieAlgebra(names.ToArray());
+            var factors = word.Select(f => f.Coefficient * algebra.Generator(f.Name)).ToArray();
+            var series = Series.BakerCampbellHausdorff.ProductOfExponentials(factors, order - 1);
+            return (series, seen.ToDictionary(kv => kv.Key, kv => kv.Value.Parameter), "Lyndon basis with standard bracketing; each letter stands for its parameter times its matrix");
+        }
+        catch (Exception e) when (e is ExactArgumentException or BeyondCapabilityException)
+        {
+            return (null, null, "the free Lie algebra layer could not take this word: " + e.Message);
+        }
     }
 
     internal static ExponentialCoordinates<T> Coordinates<T>(string description, Matrix<TruncatedSeries<T>> log, int order, IReadOnlyList<AlgebraNotebook.Exact.Symbols.Symbol> parameters)

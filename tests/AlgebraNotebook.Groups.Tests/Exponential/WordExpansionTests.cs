@@ -127,3 +127,53 @@ public class WordExpansionTests
         Assert.Throws<ExactArgumentException>(() => z.InBasis([("L_x", So3.Generator("L_x"))]));
     }
 }
+
+public class WordExpansionNestedCommutatorTests
+{
+    [Fact]
+    public void Group_commutator_is_also_given_as_nested_commutators_of_the_generator_names()
+    {
+        // log(e^X e^Y e^-X e^-Y) = [X, Y] + 1/2 [X, [X, Y]] + 1/2 [Y, [X, Y]] + O(4) (BCH applied twice; common practice),
+        // and 1/2 [Y, [X, Y]] = -1/2 [[X, Y], Y] in the Lyndon basis.
+        var so3 = StandardGroups.SpecialOrthogonal(3);
+        var z = WordExpansion.GroupCommutator(so3.Generator("L_x"), "s", so3.Generator("L_y"), "t", 4, "L_x", "L_y");
+        Assert.Equal("s*t [L_x, L_y] + 1/2*s^2*t [L_x, [L_x, L_y]] - 1/2*s*t^2 [[L_x, L_y], L_y] + O(order 4)", z.NestedCommutatorText);
+        Assert.Contains("as nested commutators", z.ToString());
+    }
+
+    [Theory]
+    [InlineData(false)]
+    [InlineData(true)]
+    public void Nested_commutator_form_evaluated_on_the_matrices_equals_the_matrix_series_logarithm(bool symmetric)
+    {
+        // Two independent routes: the free Lie algebra BCH (Lyndon projection) evaluated on the matrices, and the matrix
+        // series logarithm of the product; they must agree term by term.
+        var a = Matrix.ParseRational("[[1, 2, 0], [0, -1, 1], [3, 0, 0]]");
+        var b = Matrix.ParseRational("[[0, 1, 1], [-1, 2, 0], [0, 1/2, 1]]");
+        const int order = 5;
+        var z = symmetric
+            ? WordExpansion.SymmetricSplitting(a, b, "t", order)
+            : WordExpansion.GroupCommutator(a, "s", b, "t", order);
+        Assert.NotNull(z.NestedCommutators);
+        var parameters = symmetric
+            ? new Dictionary<string, (Symbol, Matrix<Rational>)> { ["A"] = (Symbol.Of("t"), a), ["B"] = (Symbol.Of("t"), b) }
+            : new Dictionary<string, (Symbol, Matrix<Rational>)> { ["A"] = (Symbol.Of("s"), a), ["B"] = (Symbol.Of("t"), b) };
+        var evaluated = AlgebraNotebook.Groups.Series.LieSeriesEvaluation.EvaluateWithParameters(z.NestedCommutators!, parameters).Value;
+        var fromMatrices = Matrix<Polynomial<Rational>>.Zero(3, 3);
+        for (var d = 0; d < order; d++)
+        {
+            fromMatrices += z.HomogeneousPart(d);
+        }
+
+        Assert.Equal(fromMatrices, evaluated);
+    }
+
+    [Fact]
+    public void A_name_used_for_two_matrices_gives_no_nested_commutator_form_and_says_why()
+    {
+        var so3 = StandardGroups.SpecialOrthogonal(3);
+        var z = WordExpansion.Expand([new WordFactor<Rational>(so3.Generator("L_x"), "s", "A"), new WordFactor<Rational>(so3.Generator("L_y"), "t", "A")], 3);
+        Assert.Null(z.NestedCommutators);
+        Assert.Contains("two different matrices", z.NestedCommutatorNote);
+    }
+}
