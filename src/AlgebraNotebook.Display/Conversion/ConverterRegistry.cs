@@ -9,6 +9,8 @@ using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Series;
 using AlgebraNotebook.Exact.Symbols;
+using AlgebraNotebook.Groups.Elements;
+using AlgebraNotebook.Groups.Exponential;
 using AlgebraNotebook.Groups.FreeLie;
 using AlgebraNotebook.Groups.Series;
 using AlgebraNotebook.Roots;
@@ -53,6 +55,13 @@ internal static class ConverterRegistry
         AddExact<LieSeries>(LieDisplay.FromLieSeries);
         AddExact<BracketTree>(LieDisplay.FromBracketTree);
         AddExact<ZassenhausExponents>(LieDisplay.FromZassenhaus);
+
+        // Groups layer: exponential map and group elements (converters in Display/Lie).
+        AddExact<FunctionLegend>(GroupDisplay.FromLegend);
+        AddExact<ParameterFunction>(GroupDisplay.FromParameterFunction);
+        AddGeneric(typeof(MatrixExponential<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromMatrixExponential)));
+        AddGeneric(typeof(GroupElement<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromGroupElement)));
+        AddGeneric(typeof(ExponentialCoordinates<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromExponentialCoordinates)));
     }
 
     private static MethodInfo Method(Type host, string name) =>
