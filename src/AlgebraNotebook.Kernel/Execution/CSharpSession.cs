@@ -1,0 +1,272 @@
+using AlgebraNotebook.Notebook;
+using Microsoft.CodeAnalysis;
+using Microsoft.DotNet.Interactive;
+using Microsoft.DotNet.Interactive.Commands;
+using Microsoft.DotNet.Interactive.CSharp;
+using Microsoft.DotNet.Interactive.Events;
+using Microsoft.DotNet.Interactive.Formatting;
+
+namespace AlgebraNotebook.Kernel.Execution;
+
+/// <summary>
+/// One C# session behind the Jupyter kernel: a .NET Interactive CompositeKernel holding one CSharpKernel with kernel
+/// helpers and value sharing, the AlgebraNotebook assemblies referenced (<see cref="AlgebraNotebookNamespaces.AssemblyPaths"/>),
+/// the AlgebraNotebook formatters registered (<see cref="AlgebraNotebookFormatters.Register"/>) and a using directive for
+/// every AlgebraNotebook namespace submitted before the first cell (<see cref="AlgebraNotebookNamespaces.ToUsingDirectives"/>).
+/// </summary>
+/// <remarks>
+/// Requests are expected one at a time (the server runs shell requests in order); only <see cref="Interrupt"/> may be
+/// called while a cell runs. Outputs are collected when the cell finishes, so console text written by a long cell
+/// arrives at its end, not while it runs.
+/// </remarks>
+public sealed class CSharpSession : IDisposable
+{
+    private readonly CompositeKernel kernel;
+    private volatile bool interruptRequested;
+    private volatile bool running;
+    private Task runningTask = Task.CompletedTask;
+
+    private CSharpSession(CompositeKernel kernel)
+    {
+        this.kernel = kernel;
+    }
+
+    /// <summary>
+    /// Builds a session (about one second) and submits the using directives (the first compilation, one to two seconds
+    /// more).
+    /// </summary>
+    /// <returns>The ready session.</returns>
+    /// <exception cref="InvalidOperationException">The using directives did not compile (a build problem, not a user problem).</exception>
+    public static async Task<CSharpSession> CreateAsync()
+    {
+        AlgebraNotebookFormatters.Register();
+        var csharp = new CSharpKernel().UseKernelHelpers().UseValueSharing();
+        csharp.AddAssemblyReferences(AlgebraNotebookNamespaces.AssemblyPaths);
+        var kernel = new CompositeKernel { csharp };
+        kernel.DefaultKernelName = csharp.Name;
+        var session = new CSharpSession(kernel);
+        var result = await kernel.SendAsync(new SubmitCode(AlgebraNotebookNamespaces.ToUsingDirectives())).ConfigureAwait(false);
+        if (result.Events.OfType<CommandFailed>().FirstOrDefault() is { } failed)
+        {
+            kernel.Dispose();
+            throw new InvalidOperationException($"The kernel's using directives did not compile: {failed.Message}");
+        }
+
+        return session;
+    }
+
+    /// <summary>True while a cell is executing.</summary>
+    public bool IsRunning => running;
+
+    /// <summary>Runs one cell.</summary>
+    /// <param name="code">The C# source of the cell.</param>
+    /// <returns>The outputs and, if the cell failed, the error.</returns>
+    public async Task<CellExecution> ExecuteAsync(string code)
+    {
+        ArgumentNullException.ThrowIfNull(code);
+        interruptRequested = false;
+        running = true;
+        try
+        {
+            var send = kernel.SendAsync(new SubmitCode(code));
+            runningTask = send;
+            var result = await send.ConfigureAwait(false);
+            return Collect(result, interruptRequested);
+        }
+        finally
+        {
+            running = false;
+        }
+    }
+
+    /// <summary>
+    /// Asks the running cell to stop by sending .NET Interactive's Cancel command, which cancels
+    /// KernelInvocationContext.Current.CancellationToken and completes the cell as failed. Code that never looks at that
+    /// token (a tight loop) keeps its thread; see the project README for what is honoured. Does nothing when idle.
+    /// </summary>
+    public void Interrupt()
+    {
+        if (!running)
+        {
+            return;
+        }
+
+        interruptRequested = true;
+        _ = kernel.SendAsync(new Cancel());
+    }
+
+    /// <summary>Completion candidates at a cursor position, from the C# kernel's RequestCompletions command.</summary>
+    /// <param name="code">The cell text.</param>
+    /// <param name="cursor">Cursor position in Unicode code points from the start of <paramref name="code"/>.</param>
+    /// <returns>The insert texts, and the replaced range [start, end) in code points.</returns>
+    public async Task<(IReadOnlyList<string> Matches, int Start, int End)> CompleteAsync(string code, int cursor)
+    {
+        ArgumentNullException.ThrowIfNull(code);
+        var text = new CodeText(code);
+        var utf16 = text.ToUtf16(cursor);
+        var result = await kernel.SendAsync(new RequestCompletions(code, text.ToLinePosition(utf16))).ConfigureAwait(false);
+        var produced = result.Events.OfType<CompletionsProduced>().FirstOrDefault();
+        var start = text.IdentifierStart(utf16);
+        var end = utf16;
+        if (produced?.LinePositionSpan is { } span)
+        {
+            start = text.FromLinePosition(span.Start);
+            end = text.FromLinePosition(span.End);
+        }
+
+        var matches = produced is null
+            ? Array.Empty<string>()
+            : produced.Completions
+                .OrderBy(c => c.SortText ?? c.DisplayText, StringComparer.Ordinal)
+                .Select(c => c.InsertText ?? c.DisplayText)
+                .Where(m => !string.IsNullOrEmpty(m))
+                .Distinct(StringComparer.Ordinal)
+                .ToArray();
+        return (matches, text.ToCodePoints(start), text.ToCodePoints(end));
+    }
+
+    /// <summary>Documentation for the symbol at a cursor position, from the C# kernel's RequestHoverText command.</summary>
+    /// <param name="code">The cell text.</param>
+    /// <param name="cursor">Cursor position in Unicode code points.</param>
+    /// <returns>MIME type to text (text/markdown from the kernel, plus text/plain); empty when nothing was found.</returns>
+    public async Task<IReadOnlyDictionary<string, string>> InspectAsync(string code, int cursor)
+    {
+        ArgumentNullException.ThrowIfNull(code);
+        var text = new CodeText(code);
+        var result = await kernel.SendAsync(new RequestHoverText(code, text.ToLinePosition(text.ToUtf16(cursor)))).ConfigureAwait(false);
+        var data = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var hover in result.Events.OfType<HoverTextProduced>())
+        {
+            foreach (var value in hover.Content)
+            {
+                if (!string.IsNullOrWhiteSpace(value.Value))
+                {
+                    data.TryAdd(value.MimeType, value.Value);
+                }
+            }
+        }
+
+        if (data.Count > 0 && !data.ContainsKey(PlainText))
+        {
+            data[PlainText] = data.Values.First();
+        }
+
+        return data;
+    }
+
+    /// <summary>
+    /// Disposes the kernel. A cell still running is interrupted first and given up to two seconds to end; a cell that
+    /// ignores the interruption keeps its thread until the process ends.
+    /// </summary>
+    public void Dispose()
+    {
+        Interrupt();
+        if (!runningTask.Wait(TimeSpan.FromSeconds(2)))
+        {
+            return;
+        }
+
+        kernel.Dispose();
+    }
+
+    private const string PlainText = "text/plain";
+
+    private static CellExecution Collect(KernelCommandResult result, bool interrupted)
+    {
+        var outputs = new List<CellOutput>();
+        var compileErrors = new List<string>();
+        CellError? error = null;
+        foreach (var e in result.Events)
+        {
+            switch (e)
+            {
+                case StandardOutputValueProduced stdout:
+                    AddStream(outputs, "stdout", stdout);
+                    break;
+                case StandardErrorValueProduced stderr:
+                    AddStream(outputs, "stderr", stderr);
+                    break;
+                case ReturnValueProduced value:
+                    outputs.Add(new CellOutput(CellOutputKind.Result, MimeBundle(value)));
+                    break;
+                case DisplayedValueUpdated updated:
+                    outputs.Add(new CellOutput(CellOutputKind.DisplayUpdate, MimeBundle(updated), DisplayId: updated.ValueId));
+                    break;
+                case ErrorProduced:
+                    // Reported through CommandFailed below.
+                    break;
+                case DisplayEvent displayed:
+                    outputs.Add(new CellOutput(CellOutputKind.Display, MimeBundle(displayed), DisplayId: displayed.ValueId));
+                    break;
+                case DiagnosticsProduced diagnostics:
+                    foreach (var d in diagnostics.Diagnostics.Where(d => d.Severity == DiagnosticSeverity.Error))
+                    {
+                        compileErrors.Add($"({d.LinePositionSpan.Start.Line + 1},{d.LinePositionSpan.Start.Character + 1}): error {d.Code}: {d.Message}");
+                    }
+
+                    break;
+                case CommandFailed failed:
+                    error = Describe(failed, compileErrors, interrupted);
+                    break;
+            }
+        }
+
+        return new CellExecution(outputs, error);
+    }
+
+    private static CellError Describe(CommandFailed failed, List<string> compileErrors, bool interrupted)
+    {
+        if (compileErrors.Count > 0)
+        {
+            return new CellError("CompilationError", compileErrors[0], compileErrors);
+        }
+
+        if (interrupted)
+        {
+            return new CellError("Interrupted", "The cell was interrupted.", Lines(failed.Message ?? "Cancelled."));
+        }
+
+        if (failed.Exception is { } exception && exception.GetType().Name != "CodeSubmissionCompilationErrorException")
+        {
+            return new CellError(exception.GetType().Name, exception.Message, Lines(exception.ToString()));
+        }
+
+        var message = failed.Message ?? "The cell failed without a message.";
+        var lines = Lines(message);
+        return new CellError("Error", lines[0], lines);
+    }
+
+    private static string[] Lines(string text) => text.ReplaceLineEndings("\n").TrimEnd('\n').Split('\n');
+
+    private static Dictionary<string, string> MimeBundle(DisplayEvent e)
+    {
+        var data = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (var value in e.FormattedValues)
+        {
+            data.TryAdd(value.MimeType, value.Value ?? string.Empty);
+        }
+
+        // Jupyter front ends expect text/plain in every bundle; .NET Interactive sends only the preferred type for
+        // most values, so the plain form is added from the formatter registry.
+        if (!data.ContainsKey(PlainText))
+        {
+            data[PlainText] = e.Value is null ? "null" : e.Value.ToDisplayString(PlainText);
+        }
+
+        return data;
+    }
+
+    private static void AddStream(List<CellOutput> outputs, string name, DisplayEvent e)
+    {
+        var text = e.FormattedValues.FirstOrDefault(v => v.MimeType == PlainText)?.Value
+                   ?? e.FormattedValues.FirstOrDefault()?.Value
+                   ?? string.Empty;
+        if (outputs.Count > 0 && outputs[^1] is { Kind: CellOutputKind.Stream } last && last.StreamName == name)
+        {
+            outputs[^1] = last with { Data = new Dictionary<string, string> { [PlainText] = last.Data[PlainText] + text } };
+            return;
+        }
+
+        outputs.Add(new CellOutput(CellOutputKind.Stream, new Dictionary<string, string> { [PlainText] = text }, name));
+    }
+}
