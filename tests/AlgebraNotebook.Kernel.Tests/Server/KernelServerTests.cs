@@ -1,0 +1,270 @@
+using System.Text.Json.Nodes;
+
+namespace AlgebraNotebook.Kernel.Tests.Server;
+
+/// <summary>
+/// The kernel over ZeroMQ, driven by an independent test client. Message shapes follow the Jupyter messaging
+/// protocol 5.3 (open standard: jupyter-client documentation, "Messaging in Jupyter").
+/// </summary>
+[Collection(KernelCollection.Name)]
+public class KernelServerTests
+{
+    private static readonly TimeSpan Short = TimeSpan.FromSeconds(1.5);
+    private readonly KernelFixture fixture;
+    private readonly TestClient client;
+
+    public KernelServerTests(KernelFixture fixture)
+    {
+        this.fixture = fixture;
+        client = fixture.Client;
+    }
+
+    [Fact]
+    public void Kernel_info_reply_describes_csharp_and_protocol_5_3()
+    {
+        var id = client.Send("shell", "kernel_info_request", new JsonObject());
+        var reply = client.ReceiveReply("shell", id, TestClient.ReplyTimeout);
+
+        // Field names and values from the messaging standard's kernel_info_reply section.
+        Assert.NotNull(reply);
+        Assert.Equal("kernel_info_reply", reply.Type);
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        Assert.Equal("5.3", Text(reply.Content, "protocol_version"));
+        Assert.Equal("algebranotebook-csharp", Text(reply.Content, "implementation"));
+        var language = (JsonObject)reply.Content["language_info"]!;
+        Assert.Equal("csharp", Text(language, "name"));
+        Assert.Equal(".cs", Text(language, "file_extension"));
+        Assert.Equal("text/x-csharp", Text(language, "mimetype"));
+        var statuses = client.CollectIOPub(id, TestClient.ReplyTimeout).Select(m => Text(m.Content, "execution_state")).ToArray();
+        Assert.Equal(new[] { "busy", "idle" }, statuses);
+    }
+
+    [Fact]
+    public void Kernel_info_is_also_answered_on_the_control_channel()
+    {
+        var id = client.Send("control", "kernel_info_request", new JsonObject());
+        var reply = client.ReceiveReply("control", id, TestClient.ReplyTimeout);
+        Assert.NotNull(reply);
+        Assert.Equal("kernel_info_reply", reply.Type);
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+    }
+
+    [Fact]
+    public void Executing_one_plus_one_publishes_execute_result_with_plain_text_2()
+    {
+        var (reply, iopub) = client.Execute("1+1");
+
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        var count = reply.Content["execution_count"]!.GetValue<int>();
+        Assert.True(count >= 1, reply.ToString());
+        // Order required by the standard: busy, execute_input, outputs, idle.
+        Assert.Equal("busy", Text(iopub[0].Content, "execution_state"));
+        Assert.Equal("execute_input", iopub[1].Type);
+        Assert.Equal("1+1", Text(iopub[1].Content, "code"));
+        var result = Assert.Single(iopub, m => m.Type == "execute_result");
+        Assert.Equal("2", Text((JsonObject)result.Content["data"]!, "text/plain"));
+        Assert.Equal(count, result.Content["execution_count"]!.GetValue<int>());
+        Assert.Equal("idle", Text(iopub[^1].Content, "execution_state"));
+    }
+
+    [Fact]
+    public void A_matrix_is_published_as_MathML_html_with_a_plain_text_alternative()
+    {
+        var (reply, iopub) = client.Execute("Matrix.ParseRational(\"[[1,2],[3,4]]\")");
+
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        var data = (JsonObject)Assert.Single(iopub, m => m.Type == "execute_result").Content["data"]!;
+        var html = Text(data, "text/html");
+        Assert.Contains("<math", html);
+        Assert.Contains("<mtable", html);
+        Assert.Equal(4, CountOf(html, "<mtd>"));
+        Assert.False(string.IsNullOrWhiteSpace(Text(data, "text/plain")), data.ToJsonString());
+    }
+
+    [Fact]
+    public void Console_output_is_published_as_a_stdout_stream()
+    {
+        var (reply, iopub) = client.Execute("Console.WriteLine(\"exact\"); Console.Write(\"ly\");");
+
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        var streams = iopub.Where(m => m.Type == "stream").ToArray();
+        Assert.NotEmpty(streams);
+        Assert.All(streams, s => Assert.Equal("stdout", Text(s.Content, "name")));
+        Assert.Equal("exact" + Environment.NewLine + "ly", string.Concat(streams.Select(s => Text(s.Content, "text"))));
+    }
+
+    [Fact]
+    public void A_compile_error_gives_an_error_message_and_an_error_reply()
+    {
+        var (reply, iopub) = client.Execute("var y = undefinedName + 1;");
+
+        Assert.Equal("error", Text(reply.Content, "status"));
+        Assert.Equal("CompilationError", Text(reply.Content, "ename"));
+        // CS0103 "The name ... does not exist in the current context": the C# compiler's diagnostic (common practice).
+        Assert.Contains("CS0103", Text(reply.Content, "evalue"));
+        var error = Assert.Single(iopub, m => m.Type == "error");
+        Assert.Equal("CompilationError", Text(error.Content, "ename"));
+        Assert.Contains(((JsonArray)error.Content["traceback"]!).Select(l => l!.GetValue<string>()), l => l.Contains("undefinedName"));
+        Assert.DoesNotContain(iopub, m => m.Type == "execute_result");
+    }
+
+    [Fact]
+    public void A_thrown_exception_gives_its_type_name_and_message()
+    {
+        var (reply, iopub) = client.Execute("throw new InvalidOperationException(\"no such generator\");");
+
+        Assert.Equal("error", Text(reply.Content, "status"));
+        Assert.Equal("InvalidOperationException", Text(reply.Content, "ename"));
+        Assert.Equal("no such generator", Text(reply.Content, "evalue"));
+        Assert.Single(iopub, m => m.Type == "error");
+    }
+
+    [Theory]
+    [InlineData("forged key")]
+    [InlineData("missing signature")]
+    public void A_message_with_a_bad_signature_is_ignored_and_a_later_valid_one_is_answered(string forgery)
+    {
+        var bad = client.Send("shell", "execute_request", new JsonObject { ["code"] = "Console.WriteLine(\"forged\");" },
+            signWith: forgery == "forged key" ? "not the session key"u8.ToArray() : null,
+            omitSignature: forgery == "missing signature");
+
+        Assert.Null(client.ReceiveReply("shell", bad, Short));
+        Assert.Null(client.ReceiveIOPub(m => m.ParentId == bad, TimeSpan.FromMilliseconds(200)));
+        Assert.Contains(forgery == "forged key" ? "wrong signature" : "missing signature", fixture.Log);
+
+        var good = client.Send("shell", "kernel_info_request", new JsonObject());
+        Assert.NotNull(client.ReceiveReply("shell", good, TestClient.ReplyTimeout));
+        client.CollectIOPub(good, TestClient.ReplyTimeout);
+    }
+
+    [Fact]
+    public void Interrupt_stops_a_cell_that_waits_on_the_cancellation_token()
+    {
+        var id = client.Send("shell", "execute_request", new JsonObject
+        {
+            ["code"] = "await Task.Delay(60000, Microsoft.DotNet.Interactive.KernelInvocationContext.Current.CancellationToken);",
+            ["silent"] = false,
+            ["store_history"] = true,
+        });
+        Assert.NotNull(client.ReceiveIOPub(m => m.ParentId == id && m.Type == "execute_input", TestClient.ReplyTimeout));
+        // Give the cell time to compile and reach the delay; an interrupt during compilation is honoured as well.
+        Thread.Sleep(TimeSpan.FromSeconds(1));
+        var started = DateTime.UtcNow;
+        var interrupt = client.Send("control", "interrupt_request", new JsonObject());
+
+        Assert.NotNull(client.ReceiveReply("control", interrupt, TimeSpan.FromSeconds(30)));
+        var reply = client.ReceiveReply("shell", id, TimeSpan.FromSeconds(30));
+        Assert.NotNull(reply);
+        Assert.Equal("error", Text(reply.Content, "status"));
+        Assert.Equal("Interrupted", Text(reply.Content, "ename"));
+        Assert.True(DateTime.UtcNow - started < TimeSpan.FromSeconds(30), "The cell ran on after the interrupt.");
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+        client.CollectIOPub(interrupt, TestClient.ReplyTimeout);
+
+        var (after, _) = client.Execute("1+1");
+        Assert.Equal("ok", Text(after.Content, "status"));
+    }
+
+    [Fact]
+    public void Completion_offers_members_and_the_replaced_range()
+    {
+        const string code = "Console.WriteL";
+        var id = client.Send("shell", "complete_request", new JsonObject { ["code"] = code, ["cursor_pos"] = code.Length });
+        var reply = client.ReceiveReply("shell", id, TestClient.ReplyTimeout);
+
+        Assert.NotNull(reply);
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        var matches = ((JsonArray)reply.Content["matches"]!).Select(m => m!.GetValue<string>()).ToArray();
+        Assert.Contains("WriteLine", matches);
+        Assert.Equal("Console.".Length, reply.Content["cursor_start"]!.GetValue<int>());
+        Assert.Equal(code.Length, reply.Content["cursor_end"]!.GetValue<int>());
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+    }
+
+    [Fact]
+    public void Inspection_returns_documentation_for_a_known_type()
+    {
+        const string code = "Console.WriteLine()";
+        var id = client.Send("shell", "inspect_request", new JsonObject { ["code"] = code, ["cursor_pos"] = 10, ["detail_level"] = 0 });
+        var reply = client.ReceiveReply("shell", id, TestClient.ReplyTimeout);
+
+        Assert.NotNull(reply);
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        Assert.True(reply.Content["found"]!.GetValue<bool>(), reply.ToString());
+        Assert.Contains("WriteLine", Text((JsonObject)reply.Content["data"]!, "text/plain"));
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+    }
+
+    [Theory]
+    [InlineData("var m = Matrix.Identity(2);", "complete")]
+    [InlineData("for (var i = 0; i < 3; i++)\n{", "incomplete")]
+    [InlineData("Foo(1, 2))", "invalid")]
+    public void Is_complete_requests_are_answered_with_the_bracket_heuristic(string code, string expected)
+    {
+        var id = client.Send("shell", "is_complete_request", new JsonObject { ["code"] = code });
+        var reply = client.ReceiveReply("shell", id, TestClient.ReplyTimeout);
+
+        Assert.NotNull(reply);
+        Assert.Equal(expected, Text(reply.Content, "status"));
+        if (expected == "incomplete")
+        {
+            Assert.Equal("    ", Text(reply.Content, "indent"));
+        }
+
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+    }
+
+    [Theory]
+    [InlineData("comm_info_request", "comms")]
+    [InlineData("history_request", "history")]
+    public void Comm_info_and_history_replies_are_empty(string request, string field)
+    {
+        var id = client.Send("shell", request, new JsonObject());
+        var reply = client.ReceiveReply("shell", id, TestClient.ReplyTimeout);
+
+        Assert.NotNull(reply);
+        Assert.Equal(request.Replace("_request", "_reply"), reply.Type);
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        Assert.Equal(0, reply.Content[field] switch
+        {
+            JsonObject o => o.Count,
+            JsonArray a => a.Count,
+            _ => -1,
+        });
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+    }
+
+    [Fact]
+    public void Restart_recreates_the_csharp_kernel_and_resets_the_execution_count()
+    {
+        var (defined, _) = client.Execute("var restartProbe = 41;");
+        Assert.Equal("ok", Text(defined.Content, "status"));
+
+        var id = client.Send("control", "shutdown_request", new JsonObject { ["restart"] = true });
+        var reply = client.ReceiveReply("control", id, TestClient.ReplyTimeout);
+        Assert.NotNull(reply);
+        Assert.Equal("shutdown_reply", reply.Type);
+        Assert.True(reply.Content["restart"]!.GetValue<bool>());
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+
+        var (after, _) = client.Execute("restartProbe + 1");
+        Assert.Equal("error", Text(after.Content, "status"));
+        Assert.Equal("CompilationError", Text(after.Content, "ename"));
+        Assert.Equal(1, after.Content["execution_count"]!.GetValue<int>());
+        Assert.False(fixture.Server.Completion.IsCompleted);
+    }
+
+    private static string Text(JsonObject json, string name) =>
+        json[name]?.GetValue<string>() ?? throw new Xunit.Sdk.XunitException($"No string '{name}' in {json.ToJsonString()}");
+
+    private static int CountOf(string text, string part)
+    {
+        var count = 0;
+        for (var i = text.IndexOf(part, StringComparison.Ordinal); i >= 0; i = text.IndexOf(part, i + 1, StringComparison.Ordinal))
+        {
+            count++;
+        }
+
+        return count;
+    }
+}
