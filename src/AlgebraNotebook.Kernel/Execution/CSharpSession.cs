@@ -98,7 +98,10 @@ public sealed class CSharpSession : IDisposable
     /// <summary>Completion candidates at a cursor position, from the C# kernel's RequestCompletions command.</summary>
     /// <param name="code">The cell text.</param>
     /// <param name="cursor">Cursor position in Unicode code points from the start of <paramref name="code"/>.</param>
-    /// <returns>The insert texts, and the replaced range [start, end) in code points.</returns>
+    /// <returns>
+    /// The candidates (the insert text, or for snippet items such as "WriteLine($1)" the plain name, since Jupyter
+    /// inserts matches literally) in the kernel's sort order, and the replaced range [start, end) in code points.
+    /// </returns>
     public async Task<(IReadOnlyList<string> Matches, int Start, int End)> CompleteAsync(string code, int cursor)
     {
         ArgumentNullException.ThrowIfNull(code);
@@ -118,7 +121,9 @@ public sealed class CSharpSession : IDisposable
             ? Array.Empty<string>()
             : produced.Completions
                 .OrderBy(c => c.SortText ?? c.DisplayText, StringComparer.Ordinal)
-                .Select(c => c.InsertText ?? c.DisplayText)
+                .Select(c => c.InsertTextFormat == InsertTextFormat.Snippet || string.IsNullOrEmpty(c.InsertText)
+                    ? c.FilterText ?? c.DisplayText
+                    : c.InsertText)
                 .Where(m => !string.IsNullOrEmpty(m))
                 .Distinct(StringComparer.Ordinal)
                 .ToArray();

@@ -146,10 +146,14 @@ public sealed class KernelServer : IDisposable
             current = session;
         }
 
-        if (current is { IsCompletedSuccessfully: true })
+        // A session still being built is disposed as soon as it is ready.
+        current?.ContinueWith(t =>
         {
-            current.Result.Dispose();
-        }
+            if (t.IsCompletedSuccessfully)
+            {
+                t.Result.Dispose();
+            }
+        }, TaskScheduler.Default);
 
         completion.TrySetResult();
     }
