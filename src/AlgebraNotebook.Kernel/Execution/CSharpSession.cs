@@ -22,29 +22,38 @@ namespace AlgebraNotebook.Kernel.Execution;
 public sealed class CSharpSession : IDisposable
 {
     private readonly CompositeKernel kernel;
+    private readonly TimeSpan interruptGrace;
     private volatile bool interruptRequested;
     private volatile bool running;
+    private volatile bool abandoned;
     private Task runningTask = Task.CompletedTask;
+    private TaskCompletionSource interruptSignal = new(TaskCreationOptions.RunContinuationsAsynchronously);
 
-    private CSharpSession(CompositeKernel kernel)
+    private CSharpSession(CompositeKernel kernel, TimeSpan interruptGrace)
     {
         this.kernel = kernel;
+        this.interruptGrace = interruptGrace;
     }
+
+    /// <summary>How long a cell may run on after an interrupt before it is abandoned (see <see cref="ExecuteAsync"/>).</summary>
+    public static readonly TimeSpan DefaultInterruptGrace = TimeSpan.FromSeconds(3);
 
     /// <summary>
     /// Builds a session (about one second) and submits the using directives (the first compilation, one to two seconds
     /// more).
     /// </summary>
+    /// <param name="interruptGrace">How long an interrupted cell may run on before it is abandoned; null for
+    /// <see cref="DefaultInterruptGrace"/>.</param>
     /// <returns>The ready session.</returns>
     /// <exception cref="InvalidOperationException">The using directives did not compile (a build problem, not a user problem).</exception>
-    public static async Task<CSharpSession> CreateAsync()
+    public static async Task<CSharpSession> CreateAsync(TimeSpan? interruptGrace = null)
     {
         AlgebraNotebookFormatters.Register();
         var csharp = new CSharpKernel().UseKernelHelpers().UseValueSharing();
         csharp.AddAssemblyReferences(AlgebraNotebookNamespaces.AssemblyPaths);
         var kernel = new CompositeKernel { csharp };
         kernel.DefaultKernelName = csharp.Name;
-        var session = new CSharpSession(kernel);
+        var session = new CSharpSession(kernel, interruptGrace ?? DefaultInterruptGrace);
         var result = await kernel.SendAsync(new SubmitCode(AlgebraNotebookNamespaces.ToUsingDirectives())).ConfigureAwait(false);
         if (result.Events.OfType<CommandFailed>().FirstOrDefault() is { } failed)
         {
@@ -58,19 +67,53 @@ public sealed class CSharpSession : IDisposable
     /// <summary>True while a cell is executing.</summary>
     public bool IsRunning => running;
 
+    /// <summary>
+    /// True once a cell ignored an interrupt and was abandoned: its thread still runs and the underlying .NET Interactive
+    /// kernel stays occupied by it, so this session cannot run further cells and must be replaced.
+    /// </summary>
+    public bool IsAbandoned => abandoned;
+
     /// <summary>Runs one cell.</summary>
+    /// <remarks>
+    /// After <see cref="Interrupt"/> the cell always ends with the error "Interrupted". Measured with .NET Interactive
+    /// 1.0.0-beta.26120.1: its Cancel command completes the cell at once whether or not the code stops, and code that
+    /// ignores KernelInvocationContext.Current.CancellationToken keeps running and blocks every later command. So after an
+    /// interrupt a trivial probe submission is sent; if it does not finish within the interrupt grace period, the
+    /// session is abandoned: the error says so, <see cref="IsAbandoned"/> becomes true, and the cell's thread keeps
+    /// running until it ends by itself or the process exits.
+    /// </remarks>
     /// <param name="code">The C# source of the cell.</param>
     /// <returns>The outputs and, if the cell failed, the error.</returns>
+    /// <exception cref="InvalidOperationException">The session was abandoned.</exception>
     public async Task<CellExecution> ExecuteAsync(string code)
     {
         ArgumentNullException.ThrowIfNull(code);
+        if (abandoned)
+        {
+            throw new InvalidOperationException("This C# session is still occupied by an abandoned cell.");
+        }
+
         interruptRequested = false;
+        interruptSignal = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
         running = true;
         try
         {
             var send = kernel.SendAsync(new SubmitCode(code));
             runningTask = send;
+            var graceExpired = interruptSignal.Task.ContinueWith(_ => Task.Delay(interruptGrace), TaskScheduler.Default).Unwrap();
+            if (await Task.WhenAny(send, graceExpired).ConfigureAwait(false) != send)
+            {
+                abandoned = true;
+                return Abandoned();
+            }
+
             var result = await send.ConfigureAwait(false);
+            if (interruptRequested && !await IsResponsiveAsync().ConfigureAwait(false))
+            {
+                abandoned = true;
+                return Abandoned();
+            }
+
             return Collect(result, interruptRequested);
         }
         finally
@@ -79,10 +122,26 @@ public sealed class CSharpSession : IDisposable
         }
     }
 
+    private CellExecution Abandoned() => new(Array.Empty<CellOutput>(), new CellError("Interrupted",
+        $"The cell ignored the interrupt for {interruptGrace.TotalSeconds.ToString("0.#", System.Globalization.CultureInfo.InvariantCulture)} s "
+        + "and was abandoned; its thread keeps running until it ends or the kernel process exits. A fresh C# session replaces "
+        + "it: earlier variables are gone.",
+        new[] { "Cells stop promptly on interrupt only when they observe KernelInvocationContext.Current.CancellationToken." }));
+
+    /// <summary>
+    /// After a Cancel the .NET Interactive kernel reports the cell as failed at once, even when its code keeps running and
+    /// still holds the kernel; a trivial submission that does not finish within the grace period reveals that.
+    /// </summary>
+    private async Task<bool> IsResponsiveAsync()
+    {
+        var probe = kernel.SendAsync(new SubmitCode("// interrupt probe"));
+        return await Task.WhenAny(probe, Task.Delay(interruptGrace)).ConfigureAwait(false) == probe;
+    }
+
     /// <summary>
     /// Asks the running cell to stop by sending .NET Interactive's Cancel command, which cancels
     /// KernelInvocationContext.Current.CancellationToken and completes the cell as failed. Code that never looks at that
-    /// token (a tight loop) keeps its thread; see the project README for what is honoured. Does nothing when idle.
+    /// token (a tight loop) is abandoned after the grace period (see <see cref="ExecuteAsync"/>). Does nothing when idle.
     /// </summary>
     public void Interrupt()
     {
@@ -93,6 +152,7 @@ public sealed class CSharpSession : IDisposable
 
         interruptRequested = true;
         _ = kernel.SendAsync(new Cancel());
+        interruptSignal.TrySetResult();
     }
 
     /// <summary>Completion candidates at a cursor position, from the C# kernel's RequestCompletions command.</summary>

@@ -42,6 +42,8 @@ public sealed class KernelServer : IDisposable
     private Task<CSharpSession>? session;
     private Task? worker;
     private int executionCount;
+    private volatile bool executing;
+    private volatile bool interruptPending;
     private bool disposed;
 
     /// <summary>Creates a server; nothing is bound until <see cref="Start"/>.</summary>
@@ -275,6 +277,7 @@ public sealed class KernelServer : IDisposable
             switch (request.MessageType)
             {
                 case "interrupt_request":
+                    interruptPending = executing;
                     (await CurrentSessionOrNullAsync().ConfigureAwait(false))?.Interrupt();
                     Reply(KernelChannel.Control, request, "interrupt_reply", new JsonObject { ["status"] = "ok" });
                     break;
@@ -480,14 +483,42 @@ public sealed class KernelServer : IDisposable
         }
         else
         {
+            interruptPending = false;
+            executing = true;
             try
             {
-                result = await (await SessionAsync().ConfigureAwait(false)).ExecuteAsync(code).ConfigureAwait(false);
+                var current = await SessionAsync().ConfigureAwait(false);
+                if (interruptPending)
+                {
+                    // Interrupted while the session was still being built: the cell never starts.
+                    result = new CellExecution(Array.Empty<CellOutput>(),
+                        new CellError("Interrupted", "The cell was interrupted before it started.", new[] { "Interrupted before start." }));
+                }
+                else
+                {
+                    var running = current.ExecuteAsync(code);
+                    // ExecuteAsync marks the session busy before returning; an interrupt that arrived in between is
+                    // forwarded here (the control handler forwards the ones after).
+                    if (interruptPending)
+                    {
+                        current.Interrupt();
+                    }
+
+                    result = await running.ConfigureAwait(false);
+                    if (current.IsAbandoned)
+                    {
+                        ReplaceAbandonedSession(current);
+                    }
+                }
             }
             catch (Exception e)
             {
                 result = new CellExecution(Array.Empty<CellOutput>(),
                     new CellError("KernelError", $"The C# session is not available: {e.Message}", new[] { e.ToString() }));
+            }
+            finally
+            {
+                executing = false;
             }
         }
 
@@ -530,6 +561,19 @@ public sealed class KernelServer : IDisposable
             ["payload"] = new JsonArray(),
             ["user_expressions"] = new JsonObject(),
         });
+    }
+
+    private void ReplaceAbandonedSession(CSharpSession abandoned)
+    {
+        lock (sessionGate)
+        {
+            if (session is { IsCompletedSuccessfully: true } current && ReferenceEquals(current.Result, abandoned))
+            {
+                session = CreateSessionAsync();
+            }
+        }
+
+        log.WriteLine("algebra-notebook-kernel: a cell ignored the interrupt and was abandoned; a fresh C# session replaces it.");
     }
 
     private void PublishOutput(CellOutput output, int count, JupyterMessage request)

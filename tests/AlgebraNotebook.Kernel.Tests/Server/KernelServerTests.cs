@@ -140,6 +140,7 @@ public class KernelServerTests
     [Fact]
     public void Interrupt_stops_a_cell_that_waits_on_the_cancellation_token()
     {
+        Assert.Equal("ok", Text(client.Execute("var keptAcrossInterrupt = 5;").Reply.Content, "status"));
         var id = client.Send("shell", "execute_request", new JsonObject
         {
             ["code"] = "await Task.Delay(60000, Microsoft.DotNet.Interactive.KernelInvocationContext.Current.CancellationToken);",
@@ -161,8 +162,35 @@ public class KernelServerTests
         client.CollectIOPub(id, TestClient.ReplyTimeout);
         client.CollectIOPub(interrupt, TestClient.ReplyTimeout);
 
-        var (after, _) = client.Execute("1+1");
+        // The cell honoured the token, so the session survives with its variables.
+        var (after, iopub) = client.Execute("keptAcrossInterrupt + 1");
         Assert.Equal("ok", Text(after.Content, "status"));
+        Assert.Equal("6", Text((JsonObject)Assert.Single(iopub, m => m.Type == "execute_result").Content["data"]!, "text/plain"));
+    }
+
+    [Fact]
+    public void Interrupt_abandons_a_cell_that_ignores_cancellation_and_a_fresh_session_takes_over()
+    {
+        // Measured: .NET Interactive's Cancel does not end code that never checks the token; the kernel gives up on it.
+        var id = client.Send("shell", "execute_request", new JsonObject
+        {
+            ["code"] = "var until = DateTime.UtcNow.AddSeconds(20); while (DateTime.UtcNow < until) { System.Threading.Thread.Sleep(10); }",
+        });
+        Assert.NotNull(client.ReceiveIOPub(m => m.ParentId == id && m.Type == "execute_input", TestClient.ReplyTimeout));
+        Thread.Sleep(TimeSpan.FromSeconds(1));
+        var interrupt = client.Send("control", "interrupt_request", new JsonObject());
+
+        Assert.NotNull(client.ReceiveReply("control", interrupt, TimeSpan.FromSeconds(30)));
+        var reply = client.ReceiveReply("shell", id, TimeSpan.FromSeconds(15));
+        Assert.NotNull(reply);
+        Assert.Equal("Interrupted", Text(reply.Content, "ename"));
+        Assert.Contains("abandoned", Text(reply.Content, "evalue"));
+        client.CollectIOPub(id, TestClient.ReplyTimeout);
+        client.CollectIOPub(interrupt, TestClient.ReplyTimeout);
+
+        var (after, iopub) = client.Execute("2*3");
+        Assert.Equal("ok", Text(after.Content, "status"));
+        Assert.Equal("6", Text((JsonObject)Assert.Single(iopub, m => m.Type == "execute_result").Content["data"]!, "text/plain"));
     }
 
     [Fact]
