@@ -94,6 +94,23 @@ public class KernelServerTests
     }
 
     [Fact]
+    public void Displayed_values_and_standard_error_get_their_own_messages()
+    {
+        var (reply, iopub) = client.Execute(
+            "display(Matrix.ParseRational(\"[[1/2,0],[0,1]]\")); Console.Error.Write(\"careful\"); 7");
+
+        Assert.Equal("ok", Text(reply.Content, "status"));
+        var displayed = Assert.Single(iopub, m => m.Type == "display_data");
+        Assert.Contains("<mfrac>", Text((JsonObject)displayed.Content["data"]!, "text/html"));
+        var stderr = Assert.Single(iopub, m => m.Type == "stream");
+        Assert.Equal("stderr", Text(stderr.Content, "name"));
+        Assert.Equal("careful", Text(stderr.Content, "text"));
+        // Output order is production order: display, then stderr, then the cell's value.
+        Assert.True(iopub.IndexOf(displayed) < iopub.IndexOf(stderr), string.Join(" | ", iopub));
+        Assert.True(iopub.IndexOf(stderr) < iopub.FindIndex(m => m.Type == "execute_result"), string.Join(" | ", iopub));
+    }
+
+    [Fact]
     public void A_compile_error_gives_an_error_message_and_an_error_reply()
     {
         var (reply, iopub) = client.Execute("var y = undefinedName + 1;");
