@@ -16,8 +16,7 @@ namespace AlgebraNotebook.Kernel.Execution;
 /// </summary>
 /// <remarks>
 /// Requests are expected one at a time (the server runs shell requests in order); only <see cref="Interrupt"/> may be
-/// called while a cell runs. Outputs are collected when the cell finishes, so console text written by a long cell
-/// arrives at its end, not while it runs.
+/// called while a cell runs. With an output callback, outputs are handed over while the cell runs.
 /// </remarks>
 public sealed class CSharpSession : IDisposable
 {
@@ -83,9 +82,14 @@ public sealed class CSharpSession : IDisposable
     /// running until it ends by itself or the process exits.
     /// </remarks>
     /// <param name="code">The C# source of the cell.</param>
-    /// <returns>The outputs and, if the cell failed, the error.</returns>
+    /// <param name="onOutput">
+    /// Receives each output while the cell runs (console text, displays, the result), on the kernel's thread; those
+    /// outputs are then not repeated in the returned <see cref="CellExecution.Outputs"/>. Null collects every output
+    /// into the result instead.
+    /// </param>
+    /// <returns>The outputs not already passed to <paramref name="onOutput"/> and, if the cell failed, the error.</returns>
     /// <exception cref="InvalidOperationException">The session was abandoned.</exception>
-    public async Task<CellExecution> ExecuteAsync(string code)
+    public async Task<CellExecution> ExecuteAsync(string code, Action<CellOutput>? onOutput = null)
     {
         ArgumentNullException.ThrowIfNull(code);
         if (abandoned)
@@ -98,7 +102,26 @@ public sealed class CSharpSession : IDisposable
         running = true;
         try
         {
-            var send = kernel.SendAsync(new SubmitCode(code));
+            var submission = new SubmitCode(code);
+            var streamed = 0;
+            using var subscription = onOutput is null
+                ? null
+                : kernel.KernelEvents.Subscribe(new EventObserver(e =>
+                {
+                    if (!BelongsTo(e, submission))
+                    {
+                        return;
+                    }
+
+                    var outputs = new List<CellOutput>();
+                    AddOutput(e, outputs);
+                    foreach (var output in outputs)
+                    {
+                        Interlocked.Increment(ref streamed);
+                        onOutput(output);
+                    }
+                }));
+            var send = kernel.SendAsync(submission);
             runningTask = send;
             var graceExpired = interruptSignal.Task.ContinueWith(_ => Task.Delay(interruptGrace), TaskScheduler.Default).Unwrap();
             if (await Task.WhenAny(send, graceExpired).ConfigureAwait(false) != send)
@@ -114,7 +137,10 @@ public sealed class CSharpSession : IDisposable
                 return Abandoned();
             }
 
-            return Collect(result, interruptRequested);
+            var collected = Collect(result, interruptRequested);
+            // Live events replace the collected outputs; if none arrived live (the subscription saw nothing), the
+            // collected ones are returned so nothing is lost.
+            return Volatile.Read(ref streamed) > 0 ? collected with { Outputs = Array.Empty<CellOutput>() } : collected;
         }
         finally
         {
@@ -245,24 +271,6 @@ public sealed class CSharpSession : IDisposable
         {
             switch (e)
             {
-                case StandardOutputValueProduced stdout:
-                    AddStream(outputs, "stdout", stdout);
-                    break;
-                case StandardErrorValueProduced stderr:
-                    AddStream(outputs, "stderr", stderr);
-                    break;
-                case ReturnValueProduced value:
-                    outputs.Add(new CellOutput(CellOutputKind.Result, MimeBundle(value)));
-                    break;
-                case DisplayedValueUpdated updated:
-                    outputs.Add(new CellOutput(CellOutputKind.DisplayUpdate, MimeBundle(updated), DisplayId: updated.ValueId));
-                    break;
-                case ErrorProduced:
-                    // Reported through CommandFailed below.
-                    break;
-                case DisplayEvent displayed:
-                    outputs.Add(new CellOutput(CellOutputKind.Display, MimeBundle(displayed), DisplayId: displayed.ValueId));
-                    break;
                 case DiagnosticsProduced diagnostics:
                     foreach (var d in diagnostics.Diagnostics.Where(d => d.Severity == DiagnosticSeverity.Error))
                     {
@@ -273,10 +281,66 @@ public sealed class CSharpSession : IDisposable
                 case CommandFailed failed:
                     error = Describe(failed, compileErrors, interrupted);
                     break;
+                default:
+                    AddOutput(e, outputs);
+                    break;
             }
         }
 
         return new CellExecution(outputs, error);
+    }
+
+    private static void AddOutput(KernelEvent e, List<CellOutput> outputs)
+    {
+        switch (e)
+        {
+            case StandardOutputValueProduced stdout:
+                AddStream(outputs, "stdout", stdout);
+                break;
+            case StandardErrorValueProduced stderr:
+                AddStream(outputs, "stderr", stderr);
+                break;
+            case ReturnValueProduced value:
+                outputs.Add(new CellOutput(CellOutputKind.Result, MimeBundle(value)));
+                break;
+            case DisplayedValueUpdated updated:
+                outputs.Add(new CellOutput(CellOutputKind.DisplayUpdate, MimeBundle(updated), DisplayId: updated.ValueId));
+                break;
+            case ErrorProduced:
+                // Reported through CommandFailed.
+                break;
+            case DisplayEvent displayed:
+                outputs.Add(new CellOutput(CellOutputKind.Display, MimeBundle(displayed), DisplayId: displayed.ValueId));
+                break;
+        }
+    }
+
+    /// <summary>True when the event was raised by the submission or by a command it spawned (the composite kernel
+    /// forwards a copy of the submission to the C# kernel).</summary>
+    private static bool BelongsTo(KernelEvent e, KernelCommand submission)
+    {
+        for (var command = e.Command; command is not null; command = command.Parent)
+        {
+            if (ReferenceEquals(command, submission))
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    private sealed class EventObserver(Action<KernelEvent> onNext) : IObserver<KernelEvent>
+    {
+        public void OnNext(KernelEvent value) => onNext(value);
+
+        public void OnError(Exception error)
+        {
+        }
+
+        public void OnCompleted()
+        {
+        }
     }
 
     private static CellError Describe(CommandFailed failed, List<string> compileErrors, bool interrupted)

@@ -496,7 +496,7 @@ public sealed class KernelServer : IDisposable
                 }
                 else
                 {
-                    var running = current.ExecuteAsync(code);
+                    var running = current.ExecuteAsync(code, silent ? null : output => PublishOutput(output, count, request));
                     // ExecuteAsync marks the session busy before returning; an interrupt that arrived in between is
                     // forwarded here (the control handler forwards the ones after).
                     if (interruptPending)

@@ -111,6 +111,26 @@ public class KernelServerTests
     }
 
     [Fact]
+    public void Console_output_is_published_while_the_cell_still_runs()
+    {
+        var id = client.Send("shell", "execute_request", new JsonObject
+        {
+            ["code"] = "Console.WriteLine(\"first\"); await Task.Delay(1500); Console.WriteLine(\"second\");",
+        });
+
+        var first = client.ReceiveIOPub(m => m.ParentId == id && m.Type == "stream", TestClient.ReplyTimeout);
+        var firstSeen = DateTime.UtcNow;
+        Assert.NotNull(first);
+        Assert.Equal("first" + Environment.NewLine, Text(first.Content, "text"));
+        var rest = client.CollectIOPub(id, TestClient.ReplyTimeout);
+        var idleSeen = DateTime.UtcNow;
+        Assert.NotNull(client.ReceiveReply("shell", id, TestClient.ReplyTimeout));
+        Assert.Contains(rest, m => m.Type == "stream" && Text(m.Content, "text") == "second" + Environment.NewLine);
+        // The first line arrived before the 1.5 s delay ended, not together with the end of the cell.
+        Assert.True(idleSeen - firstSeen > TimeSpan.FromSeconds(1), $"first at {firstSeen:O}, idle at {idleSeen:O}");
+    }
+
+    [Fact]
     public void A_compile_error_gives_an_error_message_and_an_error_reply()
     {
         var (reply, iopub) = client.Execute("var y = undefinedName + 1;");
