@@ -40,6 +40,19 @@ public class KernelServerTests
     }
 
     [Fact]
+    public void The_heartbeat_socket_echoes_what_it_receives()
+    {
+        using var heartbeat = new NetMQ.Sockets.RequestSocket();
+        heartbeat.Options.Linger = TimeSpan.Zero;
+        heartbeat.Connect($"tcp://127.0.0.1:{fixture.Server.BoundConnection.HeartbeatPort}");
+
+        // Messaging standard, "Heartbeat for kernels": the kernel returns each message unchanged.
+        Assert.True(NetMQ.OutgoingSocketExtensions.TrySendFrame(heartbeat, TimeSpan.FromSeconds(10), "ping 42"u8.ToArray()));
+        Assert.True(NetMQ.ReceivingSocketExtensions.TryReceiveFrameBytes(heartbeat, TimeSpan.FromSeconds(10), out var echoed));
+        Assert.Equal("ping 42"u8.ToArray(), echoed);
+    }
+
+    [Fact]
     public void Kernel_info_is_also_answered_on_the_control_channel()
     {
         var id = client.Send("control", "kernel_info_request", new JsonObject());
