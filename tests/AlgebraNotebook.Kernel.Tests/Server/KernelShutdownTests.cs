@@ -31,20 +31,21 @@ public class KernelShutdownTests
     {
         using var server = new KernelServer(KernelFixture.Connection("k"), TextWriter.Null);
         server.Start();
-        var port = server.BoundConnection.ShellPort;
-
-        // Common practice: a socket bound to 127.0.0.1 is not reachable on another local address.
-        var other = System.Net.Dns.GetHostAddresses(System.Net.Dns.GetHostName())
-            .FirstOrDefault(a => a.AddressFamily == System.Net.Sockets.AddressFamily.InterNetwork && !System.Net.IPAddress.IsLoopback(a));
-        using (var probe = new System.Net.Sockets.TcpClient())
+        var b = server.BoundConnection;
+        foreach (var port in new[] { b.ShellPort, b.ControlPort, b.StdinPort, b.IOPubPort, b.HeartbeatPort })
         {
-            probe.Connect(System.Net.IPAddress.Loopback, port);
-            Assert.True(probe.Connected);
-        }
+            using (var probe = new System.Net.Sockets.TcpClient())
+            {
+                probe.Connect(System.Net.IPAddress.Loopback, port);
+                Assert.True(probe.Connected);
+            }
 
-        Assert.True(other is not null, "The machine has no non-loopback IPv4 address to probe from; the test cannot check the binding.");
-        using var outside = new System.Net.Sockets.TcpClient();
-        var refused = Assert.ThrowsAny<System.Net.Sockets.SocketException>(() => outside.Connect(other, port));
-        Assert.Equal(System.Net.Sockets.SocketError.ConnectionRefused, refused.SocketErrorCode);
+            // From memory: Linux routes all of 127.0.0.0/8 to the loopback interface, so 127.0.0.2 reaches this machine
+            // without any network; a socket bound to 127.0.0.1 (not 0.0.0.0) refuses it.
+            using var outside = new System.Net.Sockets.TcpClient();
+            var refused = Assert.ThrowsAny<System.Net.Sockets.SocketException>(
+                () => outside.Connect(System.Net.IPAddress.Parse("127.0.0.2"), port));
+            Assert.Equal(System.Net.Sockets.SocketError.ConnectionRefused, refused.SocketErrorCode);
+        }
     }
 }
