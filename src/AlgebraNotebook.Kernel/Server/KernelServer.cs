@@ -28,8 +28,8 @@ public sealed class KernelServer : IDisposable
     private readonly MessageSigner signer;
     private readonly TextWriter log;
     private readonly string sessionId = Guid.NewGuid().ToString("N");
-    private readonly Channel<JupyterMessage> shellRequests = Channel.CreateUnbounded<JupyterMessage>(
-        new UnboundedChannelOptions { SingleReader = true });
+    // Not SingleReader: that variant cannot count queued items, which stop_on_error needs.
+    private readonly Channel<JupyterMessage> shellRequests = Channel.CreateUnbounded<JupyterMessage>();
     private readonly TaskCompletionSource completion = new(TaskCreationOptions.RunContinuationsAsynchronously);
     private readonly Lock sessionGate = new();
     private RouterSocket? shell;
@@ -44,6 +44,7 @@ public sealed class KernelServer : IDisposable
     private int executionCount;
     private volatile bool executing;
     private volatile bool interruptPending;
+    private bool abortQueuedExecutions;
     private bool disposed;
 
     /// <summary>Creates a server; nothing is bound until <see cref="Start"/>.</summary>
@@ -369,6 +370,20 @@ public sealed class KernelServer : IDisposable
             PublishStatus("busy", request);
             try
             {
+                if (abortQueuedExecutions && request.MessageType == "execute_request")
+                {
+                    // After a failed cell with stop_on_error, execute requests that were already queued are answered
+                    // "aborted" without running (the messaging standard's execute_request stop_on_error).
+                    Reply(KernelChannel.Shell, request, "execute_reply", new JsonObject
+                    {
+                        ["status"] = "aborted",
+                        ["execution_count"] = Volatile.Read(ref executionCount),
+                    });
+                    PublishStatus("idle", request);
+                    abortQueuedExecutions = shellRequests.Reader.Count > 0;
+                    continue;
+                }
+
                 if (request.MessageType == "shutdown_request")
                 {
                     HandleShutdown(KernelChannel.Shell, request);
@@ -376,6 +391,8 @@ public sealed class KernelServer : IDisposable
                 }
 
                 await HandleShellAsync(request).ConfigureAwait(false);
+                // Only requests already waiting when a cell fails are aborted.
+                abortQueuedExecutions = abortQueuedExecutions && shellRequests.Reader.Count > 0;
             }
             catch (Exception e)
             {
@@ -551,6 +568,11 @@ public sealed class KernelServer : IDisposable
                 ["evalue"] = error.Value,
                 ["traceback"] = traceback,
             });
+            if (BoolField(content, "stop_on_error", true))
+            {
+                abortQueuedExecutions = true;
+            }
+
             return;
         }
 

@@ -169,6 +169,28 @@ public class KernelServerTests
         Assert.Single(iopub, m => m.Type == "error");
     }
 
+    [Fact]
+    public void Execute_requests_queued_behind_a_failing_cell_are_aborted()
+    {
+        var failing = client.Send("shell", "execute_request", new JsonObject
+        {
+            ["code"] = "System.Threading.Thread.Sleep(500); throw new ArgumentException(\"bad generator\");",
+            ["stop_on_error"] = true,
+        });
+        var queued = client.Send("shell", "execute_request", new JsonObject { ["code"] = "Console.WriteLine(\"must not run\");" });
+
+        Assert.Equal("error", Text(client.ReceiveReply("shell", failing, TestClient.ReplyTimeout)!.Content, "status"));
+        var aborted = client.ReceiveReply("shell", queued, TestClient.ReplyTimeout);
+        // Messaging standard, execute_request "stop_on_error": queued executions are aborted after an error.
+        Assert.NotNull(aborted);
+        Assert.Equal("aborted", Text(aborted.Content, "status"));
+        client.CollectIOPub(failing, TestClient.ReplyTimeout);
+        Assert.DoesNotContain(client.CollectIOPub(queued, TestClient.ReplyTimeout), m => m.Type == "stream");
+
+        // A request sent after the failure was answered runs normally.
+        Assert.Equal("ok", Text(client.Execute("1").Reply.Content, "status"));
+    }
+
     [Theory]
     [InlineData("forged key")]
     [InlineData("missing signature")]
