@@ -1,0 +1,3 @@
+using AlgebraNotebook.Kernel;
+
+return await KernelApp.RunAsync(args, Console.Out, Console.Error);
