@@ -177,23 +177,7 @@ public sealed class UnivariatePolynomial<T> : IRingElement<UnivariatePolynomial<
             throw new ExactArgumentException($"Pow({exponent}) of the polynomial {this}: the exponent must be non-negative.", nameof(exponent));
         }
 
-        var result = One;
-        var power = this;
-        while (exponent > 0)
-        {
-            if ((exponent & 1) != 0)
-            {
-                result *= power;
-            }
-
-            exponent >>= 1;
-            if (exponent > 0)
-            {
-                power *= power;
-            }
-        }
-
-        return result;
+        return Powers.BySquaring(One, this, exponent);
     }
 
     /// <inheritdoc />

@@ -127,23 +127,7 @@ public sealed partial class Polynomial<T>
             return new Polynomial<T>([_monomials[0].Pow(exponent)], [PowScalar(_coefficients[0], exponent)]);
         }
 
-        var result = OneInstance;
-        var power = this;
-        while (exponent > 0)
-        {
-            if ((exponent & 1) != 0)
-            {
-                result *= power;
-            }
-
-            exponent >>= 1;
-            if (exponent > 0)
-            {
-                power *= power;
-            }
-        }
-
-        return result;
+        return Powers.BySquaring(OneInstance, this, exponent);
     }
 
     private static T PowScalar(T value, int exponent)

@@ -89,23 +89,7 @@ public readonly struct QuotientElement<T> :
             throw new ExactArgumentException($"Exponent {exponent} is negative; only non-negative powers of {this} are defined.", nameof(exponent));
         }
 
-        var result = new QuotientElement<T>(Ring, Polynomial<T>.One);
-        var power = this;
-        while (exponent > 0)
-        {
-            if ((exponent & 1) != 0)
-            {
-                result *= power;
-            }
-
-            exponent >>= 1;
-            if (exponent > 0)
-            {
-                power *= power;
-            }
-        }
-
-        return result;
+        return Powers.BySquaring(new QuotientElement<T>(Ring, Polynomial<T>.One), this, exponent);
     }
 
     /// <inheritdoc />

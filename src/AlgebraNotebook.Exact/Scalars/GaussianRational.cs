@@ -136,23 +136,7 @@ public readonly struct GaussianRational :
             return Reciprocal().Pow(-exponent);
         }
 
-        var result = One;
-        var power = this;
-        while (exponent > 0)
-        {
-            if ((exponent & 1) != 0)
-            {
-                result *= power;
-            }
-
-            exponent >>= 1;
-            if (exponent > 0)
-            {
-                power *= power;
-            }
-        }
-
-        return result;
+        return Powers.BySquaring(One, this, exponent);
     }
 
     /// <inheritdoc />

@@ -115,23 +115,7 @@ public sealed partial class TruncatedSeries<T>
 
     private TruncatedSeries<T> Pow(long exponent)
     {
-        var result = OneValue;
-        var power = this;
-        while (exponent > 0)
-        {
-            if ((exponent & 1) != 0)
-            {
-                result *= power;
-            }
-
-            exponent >>= 1;
-            if (exponent > 0)
-            {
-                power *= power;
-            }
-        }
-
-        return result;
+        return Powers.BySquaring(OneValue, this, exponent);
     }
 
     /// <summary>
