@@ -20,4 +20,6 @@ internal static class RepositoryPaths
     }
 
     public static string DemoNotebook => Path.Combine(Root, "notebooks", "spin-chain-exact-basics.ipynb");
+
+    public static string ControlAlgebraNotebook => Path.Combine(Root, "notebooks", "three-level-control-algebra.ipynb");
 }

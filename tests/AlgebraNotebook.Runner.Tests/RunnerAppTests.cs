@@ -32,6 +32,21 @@ public class RunnerAppTests
     }
 
     [Fact]
+    public async Task Lie_theory_demo_notebook_runs_and_shows_its_exact_results()
+    {
+        using var temp = new TempNotebook();
+        var report = Path.Combine(temp.Folder, "control.html");
+        var (code, _, stderr) = await Run("run", RepositoryPaths.ControlAlgebraNotebook, "--output", report, "--quiet");
+        Assert.True(code == 0, $"exit {code}; stderr: {stderr}");
+        var html = File.ReadAllText(report);
+        Assert.Contains("All code cells succeeded.", html);
+        // 3 x 3 = 3bar + 6 for su(3) (Slansky, Physics Reports 79 (1981), Table of tensor products).
+        Assert.Contains("3bar + 6", html);
+        // log(e^A e^B e^-A e^-B) = [A,B] + 1/2 [A,[A,B]] - 1/2 [[A,B],B] + ... (common practice, from BCH).
+        Assert.Contains("s*t [P, Q] + 1/2*s^2*t [P, [P, Q]] - 1/2*s*t^2 [[P, Q], Q]", html);
+    }
+
+    [Fact]
     public async Task Compile_and_runtime_failures_are_numbered_and_later_cells_still_run()
     {
         using var temp = new TempNotebook();
