@@ -50,6 +50,21 @@ public class CoordinateChangeTests
     }
 
     [Fact]
+    public void Spherical_ladder_operators_obey_the_angular_momentum_commutation_relations()
+    {
+        // Griffiths, Introduction to Quantum Mechanics, section 4.3 (from memory): L_+- = +-hbar e^{+-i phi}
+        // (d_theta +- i cot theta d_phi), L_z = -i hbar d_phi, with [L_z, L_+-] = +-hbar L_+- and [L_+, L_-] = 2 hbar L_z.
+        // Written in the spherical ring: e^{+-i phi} = cp +- i sp, cot theta = ct*stinv.
+        var lPlus = Sph("hbar*(cp + i*sp)*(d_theta + i*ct*stinv*d_phi)");
+        var lMinus = Sph("-hbar*(cp - i*sp)*(d_theta - i*ct*stinv*d_phi)");
+        var lZ = Sph("-i*hbar*d_phi");
+        var hbar = Sph("hbar");
+        Assert.Equal(hbar * lPlus, DifferentialOperator<GaussianRational>.Commutator(lZ, lPlus));
+        Assert.Equal(-(hbar * lMinus), DifferentialOperator<GaussianRational>.Commutator(lZ, lMinus));
+        Assert.Equal(Sph("2*hbar") * lZ, DifferentialOperator<GaussianRational>.Commutator(lPlus, lMinus));
+    }
+
+    [Fact]
     public void Spherical_operators_rewrite_back_to_Cartesian()
     {
         var back = CoordinateSystems.SphericalToCartesian(Spherical, Cartesian);

@@ -1,6 +1,8 @@
 using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Operators;
+using AlgebraNotebook.Roots;
+using AlgebraNotebook.Roots.Representations;
 
 namespace AlgebraNotebook.Operators.Tests;
 
@@ -36,6 +38,17 @@ public class LieAlgebraFromOperatorsTests
         Assert.False(algebra.IsSolvable);
         Assert.False(algebra.IsSemisimple);
         Assert.Equal(3, algebra.SolvableRadical().Count);
+
+        // Levi decomposition: the radical is the (nilpotent) Heisenberg algebra and the Levi factor is sl(2, R),
+        // type A1 with an indefinite Killing form (Olver, Example 2.41, from memory; sl(2, R) signature (2, 1) is common practice).
+        var summary = algebra.Summary();
+        Assert.Equal(3, summary.NilradicalDimension);
+        Assert.Equal(3, summary.LeviFactorDimension);
+        Assert.Equal(CartanType.Parse("A1"), summary.LeviFactorType);
+        var levi = algebra.LeviDecomposition();
+        var leviFactor = algebra.Subalgebra(levi.LeviFactor);
+        var signature = leviFactor.KillingSignature();
+        Assert.Equal((2, 1, 0), (signature.Positive, signature.Negative, signature.Zero));
     }
 
     [Fact]
@@ -85,5 +98,26 @@ public class LieAlgebraFromOperatorsTests
         Assert.Single(u3.Center());
         // The complex algebra directly from the span (over Q(i)) has the same dimension.
         Assert.Equal(9, table.ToLieAlgebra().Dimension);
+
+        // The traceless part is su(3): the Levi factor has dimension 8 and type A2 (common practice).
+        var summary = u3.Summary();
+        Assert.Equal(8, summary.LeviFactorDimension);
+        Assert.Equal(CartanType.Parse("A2"), summary.LeviFactorType);
+
+        // The oscillator level n is the symmetric irreducible (n, 0) of A2, of dimension (n+1)(n+2)/2: the degeneracy of
+        // the isotropic three-dimensional oscillator (Sakurai, Modern Quantum Mechanics, problem on the 3D oscillator,
+        // from memory). The states at level n are the monomials of degree n in three variables: counted directly here.
+        for (var n = 0; n <= 10; n++)
+        {
+            var monomials = 0;
+            for (var a = 0; a <= n; a++)
+            {
+                monomials += n - a + 1;
+            }
+
+            var irreducible = IrreducibleRepresentation.Of("A2", n, 0);
+            Assert.Equal((n + 1) * (n + 2) / 2, monomials);
+            Assert.Equal(monomials, (int)irreducible.Dimension);
+        }
     }
 }
