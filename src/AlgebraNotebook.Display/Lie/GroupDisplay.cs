@@ -106,7 +106,29 @@ public static class GroupDisplay
             .Select(t => new SumTerm(false, MathNodes.Product(MathDisplay.ToTree(t.Monomial), MathDisplay.ToTree(t.Coefficient))))
             .ToList();
         terms.Add(new SumTerm(false, new BigONode(MathNodes.Row(MathNodes.Text("order "), MathNodes.Integer(coordinates.Order)))));
-        return MathNodes.Row(MathNodes.Upright("log"), MathNodes.Fenced(MathNodes.Text(coordinates.Word)), MathNodes.Operator("="), MathNodes.Sum(terms));
+        var head = MathNodes.Row(MathNodes.Upright("log"), MathNodes.Fenced(MathNodes.Text(coordinates.Word)), MathNodes.Operator("="));
+        if (coordinates.NestedCommutators is not { } series)
+        {
+            return MathNodes.Row(head, MathNodes.Sum(terms));
+        }
+
+        // Word expansions of named generators: the nested-commutator form first, then the same element as matrices.
+        var brackets = new List<SumTerm>();
+        foreach (var (coefficient, parameters, word) in coordinates.NestedCommutatorTerms)
+        {
+            var factors = new List<MathNode>();
+            if (!coefficient.Abs().IsOne)
+            {
+                factors.Add(MathDisplay.ToTree(coefficient.Abs()));
+            }
+
+            factors.Add(MathDisplay.ToTree(parameters));
+            factors.Add(LieDisplay.Bracketing(series.Algebra, word));
+            brackets.Add(new SumTerm(coefficient.Sign < 0, MathNodes.Product(factors.ToArray())));
+        }
+
+        brackets.Add(new SumTerm(false, new BigONode(MathNodes.Row(MathNodes.Text("order "), MathNodes.Integer(coordinates.Order)))));
+        return MathNodes.Row(head, MathNodes.Sum(brackets), MathNodes.Operator("="), MathNodes.Sum(terms));
     }
 
     private static MathNode WithLegend(MathNode head, MathNode body, FunctionLegend legend, string? note)

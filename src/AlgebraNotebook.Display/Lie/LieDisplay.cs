@@ -70,7 +70,8 @@ public static class LieDisplay
         return MathNodes.Row(rows.ToArray());
     }
 
-    private static MathNode Bracketing(FreeLieAlgebra algebra, LyndonWord word)
+    /// <summary>The standard bracketing of a Lyndon word as nested commutators of the algebra's generators.</summary>
+    internal static MathNode Bracketing(FreeLieAlgebra algebra, LyndonWord word)
     {
         if (word.IsLetter)
         {

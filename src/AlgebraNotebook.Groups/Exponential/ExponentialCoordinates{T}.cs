@@ -42,6 +42,13 @@ public sealed class ExponentialCoordinates<T>
     /// </summary>
     public string? NestedCommutatorText { get; private set; }
 
+    /// <summary>
+    /// The terms of <see cref="NestedCommutators"/> with their parameters written out: coefficient, parameter monomial
+    /// and the Lyndon word whose standard bracketing is the nested commutator (of <see cref="NestedCommutators"/>'s
+    /// generators). Empty when <see cref="NestedCommutators"/> is null.
+    /// </summary>
+    public IReadOnlyList<(Rational Coefficient, Monomial Parameters, FreeLie.LyndonWord Bracket)> NestedCommutatorTerms { get; private set; } = [];
+
     internal void SetNestedCommutators(FreeLie.LieSeries? series, IReadOnlyDictionary<string, Symbol>? parameterOf, string note)
     {
         NestedCommutators = series;
@@ -53,16 +60,19 @@ public sealed class ExponentialCoordinates<T>
 
         var algebra = series.Algebra;
         var parts = new List<string>();
+        var terms = new List<(Rational, Monomial, FreeLie.LyndonWord)>();
         foreach (var (word, coefficient) in series.Terms)
         {
             var letters = word.Word.ToArray().Select(i => parameterOf[algebra.Generators[i]]);
             var monomial = Monomial.FromFactors(letters.GroupBy(p => p).Select(g => (g.Key, g.Count())));
+            terms.Add((coefficient, monomial, word));
             var c = coefficient.IsOne ? "" : coefficient == Rational.MinusOne ? "-" : coefficient + "*";
             parts.Add($"{c}{monomial} {algebra.FormatBasisElement(word)}");
         }
 
         var text = parts.Count == 0 ? "0" : string.Join(" + ", parts).Replace("+ -", "- ", StringComparison.Ordinal);
         NestedCommutatorText = $"{text} + O(order {Order})";
+        NestedCommutatorTerms = terms;
     }
 
     /// <summary>The word, e.g. "exp(s A) exp(t B) exp(-s A) exp(-t B)".</summary>
