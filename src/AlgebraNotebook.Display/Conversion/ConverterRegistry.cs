@@ -13,6 +13,7 @@ using AlgebraNotebook.Groups.Elements;
 using AlgebraNotebook.Groups.Exponential;
 using AlgebraNotebook.Groups.FreeLie;
 using AlgebraNotebook.Groups.Series;
+using AlgebraNotebook.Operators;
 using AlgebraNotebook.Roots;
 
 namespace AlgebraNotebook.Display.Conversion;
@@ -62,6 +63,12 @@ internal static class ConverterRegistry
         AddGeneric(typeof(MatrixExponential<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromMatrixExponential)));
         AddGeneric(typeof(GroupElement<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromGroupElement)));
         AddGeneric(typeof(ExponentialCoordinates<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromExponentialCoordinates)));
+
+        // Operators layer: differential operators, vector fields, coefficients, conservation checks (Display/Lie).
+        AddGeneric(typeof(DifferentialOperator<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromDifferentialOperator)));
+        AddGeneric(typeof(VectorField<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromVectorField)));
+        AddGeneric(typeof(Coefficient<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromCoefficient)));
+        AddGeneric(typeof(ConservationCheck<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromConservationCheck)));
     }
 
     private static MethodInfo Method(Type host, string name) =>
