@@ -45,6 +45,8 @@ internal static class ConverterRegistry
 
         // Algebras layer (converters in Display/Lie).
         AddGeneric(typeof(LieElement<>), Method(typeof(LieConverters), nameof(LieConverters.FromLieElement)));
+        AddGeneric(typeof(LieAlgebra<>), Method(typeof(AlgebraDisplay), nameof(AlgebraDisplay.FromLieAlgebra)));
+        AddExact<LieAlgebraSummary>(AlgebraDisplay.FromSummary);
 
         // Roots layer (converters in Display/Lie).
         AddExact<Weight>(WeightDisplay.ToTree);
