@@ -15,6 +15,7 @@ using AlgebraNotebook.Groups.FreeLie;
 using AlgebraNotebook.Groups.Series;
 using AlgebraNotebook.Operators;
 using AlgebraNotebook.Roots;
+using AlgebraNotebook.Roots.Representations;
 
 namespace AlgebraNotebook.Display.Conversion;
 
@@ -53,6 +54,15 @@ internal static class ConverterRegistry
         AddExact<Root>(RootDisplay.ToTree);
         AddExact<SimpleCartanType>(CartanTypeDisplay.ToTree);
         AddExact<CartanType>(CartanTypeDisplay.ToTree);
+        AddExact<RootSystem>(RepresentationDisplay.FromRootSystem);
+        AddExact<IrreducibleRepresentation>(RepresentationDisplay.FromIrreducible);
+        AddExact<RepresentationSum>(RepresentationDisplay.FromRepresentationSum);
+        AddExact<RepresentationTableRow>(RepresentationDisplay.FromTableRow);
+        AddExact<ChargedTerm>(RepresentationDisplay.FromChargedTerm);
+
+        // The runtime types of RepresentationTable.UpToDimension and BranchingRule.RestrictWithCharges results.
+        AddExact<RepresentationTableRow[]>(RepresentationDisplay.FromTable);
+        AddExact<List<ChargedTerm>>(RepresentationDisplay.FromChargedTerms);
 
         // Groups layer: free Lie algebra, BCH and Zassenhaus series (converters in Display/Lie).
         AddExact<LieSeries>(LieDisplay.FromLieSeries);

@@ -30,6 +30,7 @@ internal sealed class LatexRenderer
         ["…"] = @"\dots",
         ["⋯"] = @"\cdots",
         ["∂"] = @"\partial",
+        ["′"] = "'",
     };
 
     private readonly StringBuilder _out = new();

@@ -33,6 +33,7 @@ internal sealed class PlainTextRenderer
         ["…"] = "...",
         ["⋯"] = "...",
         ["∂"] = "d",
+        ["′"] = "'",
     };
 
     private readonly StringBuilder _out = new();
@@ -143,7 +144,8 @@ internal sealed class PlainTextRenderer
                 _out.Append(textNode.Text);
                 break;
             case OverlineNode overline:
-                WriteGrouped(overline.Content, !IsAtom(overline.Content));
+                // A row such as 351′ needs no parentheses: "351'bar" is the spelling of representation names.
+                WriteGrouped(overline.Content, overline.Content is SumNode or ProductNode or FractionNode or PowerNode);
                 _out.Append("bar");
                 break;
             case BigONode bigO:
