@@ -43,8 +43,7 @@ internal static class OperatorDisplay
         where T : IFieldElement<T> => MathDisplay.ToTree(coefficient.Polynomial);
 
     /// <summary>
-    /// "[H, A] = 0, A is conserved" or "[H, A] = remainder, A is not conserved", followed by the two operators
-    /// (A the quantity, H the generator).
+    /// "A = quantity, H = generator, [H, A] = remainder", then in words whether A commutes with H (is conserved).
     /// </summary>
     public static MathNode FromConservationCheck<T>(ConservationCheck<T> check)
         where T : IFieldElement<T>
@@ -52,17 +51,15 @@ internal static class OperatorDisplay
         var h = MathNodes.Symbol("H");
         var a = MathNodes.Symbol("A");
         return MathNodes.Row(
+            a, MathNodes.Operator("="), FromDifferentialOperator(check.Quantity),
+            MathNodes.Operator(","),
+            h, MathNodes.Operator("="), FromDifferentialOperator(check.Generator),
+            MathNodes.Operator(","),
             MathNodes.Fenced(MathNodes.Row(h, MathNodes.Operator(","), a), FenceKind.Brackets),
             MathNodes.Operator("="),
             FromDifferentialOperator(check.Commutator),
             MathNodes.Operator(","),
-            MathNodes.Text(check.Commutes ? "A commutes with H (conserved)" : "A does not commute with H"),
-            MathNodes.Operator(","),
-            MathNodes.Text("where"),
-            MathNodes.Operator(","),
-            a, MathNodes.Operator("="), FromDifferentialOperator(check.Quantity),
-            MathNodes.Operator(","),
-            h, MathNodes.Operator("="), FromDifferentialOperator(check.Generator));
+            MathNodes.Text(check.Commutes ? "A commutes with H (conserved)" : "A does not commute with H"));
     }
 
     /// <summary>The product of ∂ₓ^k over the coordinates in the ring's order; the empty multi-index gives 1.</summary>

@@ -19,6 +19,17 @@ public class OperatorDisplayTests
     }
 
     [Fact]
+    public void Conservation_check_vector_field_and_coefficient_match_approved_outputs()
+    {
+        // [d_x^2 + d_y^2 + d_z^2, L_z] = 0: rotations about z commute with the Laplacian (common practice).
+        var laplacian = DifferentialOperator<Rational>.Parse(Cartesian, "d_x^2 + d_y^2 + d_z^2");
+        Approvals.VerifyAllFormats("Operator_conservation_Lz_laplacian", Lz.CommutesWith(laplacian));
+        // The Euler (scaling) field x d_x + y d_y (common practice) and the coefficient x^2 + y^2.
+        Approvals.VerifyAllFormats("Operator_vector_field_scaling", VectorField<Rational>.FromOperator(DifferentialOperator<Rational>.Parse(Cartesian, "x*d_x + y*d_y")));
+        Approvals.VerifyAllFormats("Operator_coefficient_radius_squared", Cartesian.Element("x^2 + y^2"));
+    }
+
+    [Fact]
     public void Coefficients_stand_left_of_derivatives_and_repeated_derivatives_are_powers()
     {
         // Leibniz rule: d_x * x = x d_x + 1 (common practice); the normal form puts the coefficient first.
@@ -38,10 +49,10 @@ public class OperatorDisplayTests
         var laplacian = DifferentialOperator<Rational>.Parse(Cartesian, "d_x^2 + d_y^2 + d_z^2");
         var check = Lz.CommutesWith(laplacian);
         var text = MathDisplay.ToPlainText(check);
-        Assert.StartsWith("[H, A] = 0, A commutes with H (conserved)", text);
-        Assert.Contains("A = -y*d_x + x*d_y", text);
+        Assert.EndsWith("[H, A] = 0, A commutes with H (conserved)", text);
+        Assert.StartsWith("A = -y*d_x + x*d_y, H = d_x^2 + d_y^2 + d_z^2", text);
         var x = DifferentialOperator<Rational>.Parse(Cartesian, "x");
-        Assert.StartsWith("[H, A] = 1, A does not commute", MathDisplay.ToPlainText(x.CommutesWith(DifferentialOperator<Rational>.Parse(Cartesian, "d_x"))));
+        Assert.EndsWith("[H, A] = 1, A does not commute with H", MathDisplay.ToPlainText(x.CommutesWith(DifferentialOperator<Rational>.Parse(Cartesian, "d_x"))));
     }
 
     [Fact]

@@ -64,6 +64,17 @@ public class RepresentationDisplayTests
     }
 
     [Fact]
+    public void Table_and_charged_branching_match_approved_outputs()
+    {
+        // su(3) irreducibles up to dimension 8: 1, 3, 3bar, 6, 6bar, 8 (Slansky, Phys. Rep. 79 (1981), table 22).
+        Approvals.VerifyAllFormats("Roots_table_A2_up_to_8", RepresentationTable.UpToDimension(RootSystem.Of("A2"), 8));
+        // SU(5) -> SU(3) x SU(2) x U(1): 5 = (3, 1) + (1, 2), charges in the ratio 2 : -3 like the hypercharges
+        // -1/3 and 1/2 up to sign and scale (Slansky, Phys. Rep. 79 (1981), section 7; from memory).
+        var rule = BranchingRule.ToLevi(RootSystem.Of("A4"), 3);
+        Approvals.VerifyAllFormats("Roots_charged_branching_A4_five", rule.RestrictWithCharges(IrreducibleRepresentation.Of("A4", 1, 0, 0, 0)));
+    }
+
+    [Fact]
     public void Semisimple_names_and_charged_branching_terms_render()
     {
         // SU(5) -> SU(3) x SU(2) x U(1): 5 = (3, 1) + (1, 2) (Slansky, Phys. Rep. 79 (1981), table 30 and section 7).
