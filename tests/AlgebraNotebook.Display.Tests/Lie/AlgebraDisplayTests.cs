@@ -54,6 +54,20 @@ public class AlgebraDisplayTests
     }
 
     [Fact]
+    public void Basis_names_with_markup_characters_are_escaped()
+    {
+        // XML 1.0 (Fifth Edition), section 2.4: & and < must be escaped in character data.
+        var constants = new Rational[2, 2, 2];
+        constants[0, 1, 1] = Rational.One;
+        constants[1, 0, 1] = -Rational.One;
+        var algebra = LieAlgebra<Rational>.FromStructureConstants(["a<b", "c&d"], constants, "names with markup");
+        var document = XDocument.Parse(MathDisplay.ToMathML(algebra));
+        Assert.Contains(document.Descendants(), e => e.Name.LocalName == "mi" && e.Value == "a<b");
+        Assert.Contains(document.Descendants(), e => e.Name.LocalName == "mi" && e.Value == "c&d");
+        Assert.DoesNotContain("c&d", MathDisplay.ToLatex(algebra));
+    }
+
+    [Fact]
     public void Label_text_is_escaped_and_the_MathML_is_well_formed()
     {
         var algebra = LieAlgebra<Rational>.FromStructureConstants(["X", "Y"], new Rational[2, 2, 2], "a < b & \"c\"");
