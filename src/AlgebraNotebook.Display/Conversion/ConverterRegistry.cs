@@ -13,7 +13,9 @@ using AlgebraNotebook.Groups.Elements;
 using AlgebraNotebook.Groups.Exponential;
 using AlgebraNotebook.Groups.FreeLie;
 using AlgebraNotebook.Groups.Series;
+using AlgebraNotebook.Operators;
 using AlgebraNotebook.Roots;
+using AlgebraNotebook.Roots.Representations;
 
 namespace AlgebraNotebook.Display.Conversion;
 
@@ -44,12 +46,23 @@ internal static class ConverterRegistry
 
         // Algebras layer (converters in Display/Lie).
         AddGeneric(typeof(LieElement<>), Method(typeof(LieConverters), nameof(LieConverters.FromLieElement)));
+        AddGeneric(typeof(LieAlgebra<>), Method(typeof(AlgebraDisplay), nameof(AlgebraDisplay.FromLieAlgebra)));
+        AddExact<LieAlgebraSummary>(AlgebraDisplay.FromSummary);
 
         // Roots layer (converters in Display/Lie).
         AddExact<Weight>(WeightDisplay.ToTree);
         AddExact<Root>(RootDisplay.ToTree);
         AddExact<SimpleCartanType>(CartanTypeDisplay.ToTree);
         AddExact<CartanType>(CartanTypeDisplay.ToTree);
+        AddExact<RootSystem>(RepresentationDisplay.FromRootSystem);
+        AddExact<IrreducibleRepresentation>(RepresentationDisplay.FromIrreducible);
+        AddExact<RepresentationSum>(RepresentationDisplay.FromRepresentationSum);
+        AddExact<RepresentationTableRow>(RepresentationDisplay.FromTableRow);
+        AddExact<ChargedTerm>(RepresentationDisplay.FromChargedTerm);
+
+        // The runtime types of RepresentationTable.UpToDimension and BranchingRule.RestrictWithCharges results.
+        AddExact<RepresentationTableRow[]>(RepresentationDisplay.FromTable);
+        AddExact<List<ChargedTerm>>(RepresentationDisplay.FromChargedTerms);
 
         // Groups layer: free Lie algebra, BCH and Zassenhaus series (converters in Display/Lie).
         AddExact<LieSeries>(LieDisplay.FromLieSeries);
@@ -62,6 +75,12 @@ internal static class ConverterRegistry
         AddGeneric(typeof(MatrixExponential<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromMatrixExponential)));
         AddGeneric(typeof(GroupElement<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromGroupElement)));
         AddGeneric(typeof(ExponentialCoordinates<>), Method(typeof(GroupDisplay), nameof(GroupDisplay.FromExponentialCoordinates)));
+
+        // Operators layer: differential operators, vector fields, coefficients, conservation checks (Display/Lie).
+        AddGeneric(typeof(DifferentialOperator<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromDifferentialOperator)));
+        AddGeneric(typeof(VectorField<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromVectorField)));
+        AddGeneric(typeof(Coefficient<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromCoefficient)));
+        AddGeneric(typeof(ConservationCheck<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromConservationCheck)));
     }
 
     private static MethodInfo Method(Type host, string name) =>

@@ -29,6 +29,8 @@ internal sealed class LatexRenderer
         ["}"] = @"\}",
         ["…"] = @"\dots",
         ["⋯"] = @"\cdots",
+        ["∂"] = @"\partial",
+        ["′"] = "'",
     };
 
     private readonly StringBuilder _out = new();
@@ -120,6 +122,11 @@ internal sealed class LatexRenderer
                 break;
             case TextNode text:
                 Emit(@"\text{" + EscapeText(text.Text) + "}");
+                break;
+            case OverlineNode overline:
+                Emit(@"\overline{");
+                Write(overline.Content);
+                Emit("}");
                 break;
             case BigONode bigO:
                 Emit("O");

@@ -131,6 +131,11 @@ internal sealed class MathMLRenderer
                 XmlText.Append(_out, text.Text);
                 _out.Append("</mtext>");
                 break;
+            case OverlineNode overline:
+                _out.Append("<mover accent=\"true\">");
+                Write(overline.Content);
+                _out.Append("<mo stretchy=\"true\">&#x203E;</mo></mover>");
+                break;
             case BigONode bigO:
                 _out.Append("<mrow>");
                 WriteIdentifierElement("O", upright: false);

@@ -32,6 +32,8 @@ internal sealed class PlainTextRenderer
         ["∈"] = " in ",
         ["…"] = "...",
         ["⋯"] = "...",
+        ["∂"] = "d",
+        ["′"] = "'",
     };
 
     private readonly StringBuilder _out = new();
@@ -141,6 +143,11 @@ internal sealed class PlainTextRenderer
             case TextNode textNode:
                 _out.Append(textNode.Text);
                 break;
+            case OverlineNode overline:
+                // A row such as 351′ needs no parentheses: "351'bar" is the spelling of representation names.
+                WriteGrouped(overline.Content, overline.Content is SumNode or ProductNode or FractionNode or PowerNode);
+                _out.Append("bar");
+                break;
             case BigONode bigO:
                 _out.Append("O(");
                 Write(bigO.Argument);
@@ -152,7 +159,8 @@ internal sealed class PlainTextRenderer
     }
 
     private static bool IsAtom(MathNode node) =>
-        node is NumberNode or IdentifierNode or FencedNode or MatrixNode or BigONode or TextNode or SubscriptNode;
+        node is NumberNode or IdentifierNode or FencedNode or MatrixNode or BigONode or TextNode or SubscriptNode or OverlineNode
+        || node is OperatorNode { Text: "∂" };
 
     private static bool IsCompoundRow(MathNode node) => node is RowNode { Items.Count: > 1 };
 

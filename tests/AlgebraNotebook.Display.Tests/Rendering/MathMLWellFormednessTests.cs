@@ -22,6 +22,8 @@ public class MathMLWellFormednessTests
             { "nested", MathNodes.Power(MathNodes.Sum(x, half), MathNodes.Fraction(x, MathNodes.Symbol("J_alpha"))) },
             { "order term", MathNodes.Sum(MathNodes.One, x, new BigONode(MathNodes.Power(x, 3))) },
             { "subscript", new SubscriptNode(MathNodes.Symbol("e"), MathNodes.Sum(MathNodes.Symbol("i"), MathNodes.One)) },
+            { "overline over a primed number", new OverlineNode(MathNodes.Row(MathNodes.Integer(351), MathNodes.Operator("′"))) },
+            { "partial derivative", MathNodes.Power(new SubscriptNode(MathNodes.Operator("∂"), MathNodes.Symbol("x")), 2) },
             { "power of subscripted names", MathNodes.Product(MathNodes.Power(MathNodes.Symbol("omega12"), 2), MathNodes.Power(new SubscriptNode(MathNodes.Symbol("e"), MathNodes.Integer(3)), 2)) },
         };
     }
