@@ -41,7 +41,7 @@ public class RunnerAppTests
         var html = File.ReadAllText(report);
         Assert.Contains("All code cells succeeded.", html);
         // 3 x 3 = 3bar + 6 for su(3) (Slansky, Physics Reports 79 (1981), Table of tensor products).
-        Assert.Contains("3bar + 6", html);
+        Assert.Contains("data-latex=\"\\overline{3} + 6, \\text{dimension} = 9\"", html);
         // log(e^A e^B e^-A e^-B) = [A,B] + 1/2 [A,[A,B]] - 1/2 [[A,B],B] + ... (common practice, from BCH).
         Assert.Contains("s*t [P, Q] + 1/2*s^2*t [P, [P, Q]] - 1/2*s*t^2 [[P, Q], Q]", html);
     }
