@@ -90,33 +90,18 @@ internal static class AlgebraDisplay
     }
 
     /// <summary>
-    /// "dimension = 10, neither solvable nor semisimple, centre dimension = 0, derived algebra [g, g] dimension = 10, radical dimension = 7,
-    /// nilradical dimension = 7, Levi factor dimension = 3, Levi factor type over the complex numbers = A₁", then the simple ideals' dimensions
-    /// (semisimple algebras) and the notes as text.
+    /// A two-column table, one fact a row: dimension, kind, the dimensions of the centre, [g, g], radical, nilradical and
+    /// Levi factor, the Levi factor's type over the complex numbers, the simple ideals' dimensions (semisimple algebras)
+    /// and the notes.
     /// </summary>
     public static MathNode FromSummary(LieAlgebraSummary summary)
     {
-        var items = new List<MathNode>();
-        void Fact(string words, MathNode value)
-        {
-            if (items.Count > 0)
-            {
-                items.Add(MathNodes.Operator(","));
-            }
-
-            items.Add(MathNodes.Text(words));
-            items.Add(MathNodes.Operator("="));
-            items.Add(value);
-        }
-
-        void Words(string words)
-        {
-            items.Add(MathNodes.Operator(","));
-            items.Add(MathNodes.Text(words));
-        }
+        // A two-column table (fact, value), one fact a row, so a long summary reads downwards instead of scrolling.
+        var rows = new List<IReadOnlyList<MathNode>>();
+        void Fact(string words, MathNode value) => rows.Add([MathNodes.Text(words), value]);
 
         Fact("dimension", MathNodes.Integer(summary.Dimension));
-        Words(Kind(summary));
+        Fact("kind", MathNodes.Text(Kind(summary)));
         Fact("centre dimension", MathNodes.Integer(summary.CenterDimension));
         Fact("derived algebra [g, g] dimension", MathNodes.Integer(summary.DerivedDimension));
         Fact("radical dimension", MathNodes.Integer(summary.RadicalDimension));
@@ -134,10 +119,10 @@ internal static class AlgebraDisplay
 
         foreach (var note in summary.Notes)
         {
-            Words(note);
+            Fact("note", MathNodes.Text(note));
         }
 
-        return MathNodes.Row(items.ToArray());
+        return new MatrixNode(rows, FenceKind.Brackets);
     }
 
     private static string Kind(LieAlgebraSummary summary) =>

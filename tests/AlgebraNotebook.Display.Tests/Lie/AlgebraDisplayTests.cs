@@ -28,8 +28,8 @@ public class AlgebraDisplayTests
         // span{N} (common practice).
         var b = LieAlgebra<Rational>.FromCommutatorTable("[H, N] = N");
         var text = MathDisplay.ToPlainText(b.Summary());
-        Assert.StartsWith("dimension = 2, solvable, not nilpotent, centre dimension = 0, derived algebra [g, g] dimension = 1", text);
-        Assert.Contains("nilradical dimension = 1, Levi factor dimension = 0", text);
+        Assert.StartsWith("[[dimension, 2], [kind, solvable, not nilpotent], [centre dimension, 0], [derived algebra [g, g] dimension, 1]", text);
+        Assert.Contains("[nilradical dimension, 1], [Levi factor dimension, 0]", text);
     }
 
     [Fact]
