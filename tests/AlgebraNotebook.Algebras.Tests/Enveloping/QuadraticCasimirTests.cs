@@ -81,6 +81,24 @@ public class QuadraticCasimirTests
     }
 
     [Fact]
+    public void Trace_form_Casimirs_of_sl3_and_sp4_are_central()
+    {
+        // Any invariant non-degenerate form gives a central element (Humphreys, Introduction to Lie Algebras, §6.2).
+        Assert.True(CasimirElements.CheckCentral(CasimirElements.QuadraticCasimir(Algebra("sl3"), EnvelopingSamples.Sl3Defining())).IsCentral);
+        Assert.True(CasimirElements.CheckCentral(CasimirElements.QuadraticCasimir(Algebra("sp4"), EnvelopingSamples.Sp4Defining())).IsCentral);
+    }
+
+    [Fact]
+    public void Killing_Casimir_of_complexified_so3_is_central_and_acts_as_1_on_the_adjoint()
+    {
+        // Over Q(i) the same construction works (Killing normalisation, common practice).
+        var g = RealLieAlgebras.Complexify(Samples.So3());
+        var c = CasimirElements.QuadraticCasimir(g);
+        Assert.True(CasimirElements.CheckCentral(c).IsCentral);
+        Assert.Equal(GaussianRational.One, CasimirElements.Eigenvalue(c, g.AdjointMatrices()));
+    }
+
+    [Fact]
     public void Non_central_element_reports_the_first_non_zero_commutator()
     {
         // [H, E F] = [H, E] F + E [H, F] = 2 E F - 2 E F = 0, but [E, E F] = E [E, F] = E H = H E - 2 E (derived).
