@@ -21,6 +21,22 @@ public class CasimirEigenvalueTests
     }
 
     [Theory]
+    [InlineData(0)]
+    [InlineData(1)]
+    [InlineData(2)]
+    [InlineData(3)]
+    [InlineData(5)]
+    public void Killing_Casimir_of_sl2_on_V_m_is_m_times_m_plus_2_over_8(int m)
+    {
+        // On V(m): C = (1/8)(H^2 + 2H + 4FE) acts on the highest vector as (m^2 + 2m)/8 (Humphreys §7.2 module, derived),
+        // and the roots layer's Killing-normalised value of A1 with label m must agree.
+        var g = Samples.Sl2();
+        var value = CasimirElements.Eigenvalue(CasimirElements.QuadraticCasimir(g), EnvelopingSamples.Sl2Irreducible(m));
+        Assert.Equal(new Rational(m * (m + 2), 8), value);
+        Assert.Equal(IrreducibleRepresentation.Of("A1", m).QuadraticCasimir(CasimirNormalisation.Killing), value);
+    }
+
+    [Theory]
     [InlineData("sl3")]
     [InlineData("sp4")]
     [InlineData("so5")]

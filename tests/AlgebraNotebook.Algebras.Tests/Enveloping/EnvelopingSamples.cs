@@ -18,6 +18,17 @@ internal static class EnvelopingSamples
     internal static Matrix<Rational>[] Sl2Defining() =>
         [Samples.Q([1, 0], [0, -1]), Samples.Q([0, 1], [0, 0]), Samples.Q([0, 0], [1, 0])];
 
+    // The irreducible sl(2)-module V(m) of dimension m + 1 in the basis v_0..v_m (Humphreys, Introduction to Lie Algebras,
+    // §7.2): H v_i = (m - 2i) v_i, F v_i = (i + 1) v_(i+1), E v_i = (m - i + 1) v_(i-1).
+    internal static Matrix<Rational>[] Sl2Irreducible(int m)
+    {
+        var size = m + 1;
+        var h = Matrix<Rational>.FromFunction(size, size, (r, c) => r == c ? (Rational)(m - 2 * c) : Rational.Zero);
+        var e = Matrix<Rational>.FromFunction(size, size, (r, c) => r == c - 1 ? (Rational)(m - c + 1) : Rational.Zero);
+        var f = Matrix<Rational>.FromFunction(size, size, (r, c) => r == c + 1 ? (Rational)(c + 1) : Rational.Zero);
+        return [h, e, f];
+    }
+
     // sl(3) on C^3 in the documented basis of LieAlgebras.SpecialLinear: H_1, H_2, then E_ij (i != j) row-major.
     internal static Matrix<Rational>[] Sl3Defining()
     {
