@@ -52,6 +52,22 @@ public class CubicCasimirTests
     }
 
     [Fact]
+    public void Cubic_Casimir_ratio_between_Sym2_C3_and_C3_is_7_2()
+    {
+        // su(3) cubic Casimir on (p, q) is proportional to (p - q)(2p + q + 3)(p + 2q + 3) (common practice, from memory):
+        // (1, 0) gives 20 and (2, 0) gives 70, a normalisation-free ratio 7/2. The quadratic one on Sym^2 C^3 = V(2, 0)
+        // must match the roots layer (Killing normalisation).
+        var g = LieAlgebras.SpecialLinear<Rational>(3);
+        var rho = EnvelopingSamples.Sl3Defining();
+        var sym2 = EnvelopingSamples.SymmetricSquare(rho);
+        var c3 = CasimirElements.CubicCasimir(g, rho);
+        Assert.Equal(new Rational(7, 2), CasimirElements.Eigenvalue(c3, sym2) / CasimirElements.Eigenvalue(c3, rho));
+        Assert.Equal(
+            Roots.Representations.IrreducibleRepresentation.Of("A2", 2, 0).QuadraticCasimir(Roots.Representations.CasimirNormalisation.Killing),
+            CasimirElements.Eigenvalue(CasimirElements.QuadraticCasimir(g), sym2));
+    }
+
+    [Fact]
     public void Cubic_trace_Casimir_of_sl2_vanishes()
     {
         // sl(2) has no cubic invariant (degrees 2 only; Humphreys, Reflection Groups, Table 3.1): tr of odd products of Pauli-type matrices symmetrise to 0.

@@ -29,6 +29,38 @@ internal static class EnvelopingSamples
         return [h, e, f];
     }
 
+    // The symmetric square of a representation, in the basis of products e_a e_b (a <= b) in lexicographic order:
+    // X (e_a e_b) = (X e_a) e_b + e_a (X e_b) (common practice).
+    internal static Matrix<Rational>[] SymmetricSquare(IReadOnlyList<Matrix<Rational>> rho)
+    {
+        var n = rho[0].RowCount;
+        var pairs = new List<(int, int)>();
+        for (var a = 0; a < n; a++)
+        {
+            for (var b = a; b < n; b++)
+            {
+                pairs.Add((a, b));
+            }
+        }
+
+        int Index(int a, int b) => pairs.IndexOf((Math.Min(a, b), Math.Max(a, b)));
+        return rho.Select(x =>
+        {
+            var m = new Rational[pairs.Count, pairs.Count];
+            for (var col = 0; col < pairs.Count; col++)
+            {
+                var (a, b) = pairs[col];
+                for (var c = 0; c < n; c++)
+                {
+                    m[Index(c, b), col] += x[c, a];
+                    m[Index(a, c), col] += x[c, b];
+                }
+            }
+
+            return Matrix<Rational>.FromFunction(pairs.Count, pairs.Count, (i, j) => m[i, j]);
+        }).ToArray();
+    }
+
     // sl(3) on C^3 in the documented basis of LieAlgebras.SpecialLinear: H_1, H_2, then E_ij (i != j) row-major.
     internal static Matrix<Rational>[] Sl3Defining()
     {
