@@ -1,4 +1,5 @@
 using AlgebraNotebook.Algebras;
+using AlgebraNotebook.Display.Conversion;
 using AlgebraNotebook.Display.Tree;
 using AlgebraNotebook.Exact.Scalars;
 
@@ -123,6 +124,41 @@ internal static class AlgebraDisplay
         }
 
         return new MatrixNode(rows, FenceKind.Brackets);
+    }
+
+    /// <summary>
+    /// The one-call report: the algebra's card (basis and brackets), then a fact table with the structure summary, the
+    /// Killing form and its signature, the real form, the quadratic Casimir and the Casimir degrees, and the notes.
+    /// </summary>
+    public static MathNode FromReport(LieAlgebraReport report)
+    {
+        var rows = new List<IReadOnlyList<MathNode>>();
+        void Fact(string words, MathNode value) => rows.Add([MathNodes.Text(words), value]);
+
+        Fact("structure", FromSummary(report.Summary));
+        Fact("Killing form K(x, y) = tr(ad x ad y)", ConverterRegistry.ToTree(report.KillingForm));
+        Fact("Killing signature (positive, negative, zero)", MathNodes.Text(report.KillingSignature.ToString()));
+        if (report.RealForm is { } realForm)
+        {
+            Fact("real form", MathNodes.Text(realForm.Name));
+        }
+
+        if (report.QuadraticCasimir is { } casimir)
+        {
+            Fact("quadratic Casimir (inverse Killing form; 1 on the adjoint of a simple algebra)", ConverterRegistry.ToTree(casimir));
+        }
+
+        if (report.CasimirDegrees is { } degrees)
+        {
+            Fact("independent Casimirs (degrees of the basic invariants)", List(degrees.Degrees.Select(d => MathNodes.Integer(d))));
+        }
+
+        foreach (var note in report.Notes)
+        {
+            Fact("note", MathNodes.Text(note));
+        }
+
+        return MathNodes.Row(FromLieAlgebra(report.Algebra), new MatrixNode(rows, FenceKind.Brackets));
     }
 
     private static string Kind(LieAlgebraSummary summary) =>
