@@ -47,6 +47,7 @@ internal static class ConverterRegistry
         // Algebras layer (converters in Display/Lie).
         AddGeneric(typeof(LieElement<>), Method(typeof(LieConverters), nameof(LieConverters.FromLieElement)));
         AddExact<LieAlgebraReport>(AlgebraDisplay.FromReport);
+        AddExact<FormSignature>(AlgebraDisplay.FromSignature);
         AddGeneric(typeof(AlgebraNotebook.Algebras.Enveloping.EnvelopingElement<>), Method(typeof(EnvelopingDisplay), nameof(EnvelopingDisplay.FromEnvelopingElement)));
         AddGeneric(typeof(LieAlgebra<>), Method(typeof(AlgebraDisplay), nameof(AlgebraDisplay.FromLieAlgebra)));
         AddExact<LieAlgebraSummary>(AlgebraDisplay.FromSummary);

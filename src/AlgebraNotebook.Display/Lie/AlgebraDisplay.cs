@@ -127,17 +127,20 @@ internal static class AlgebraDisplay
     }
 
     /// <summary>
-    /// The one-call report: the algebra's card (basis and brackets), then a fact table with the structure summary, the
-    /// Killing form and its signature, the real form, the quadratic Casimir and the Casimir degrees, and the notes.
+    /// The one-call report as a fact table: the algebra's label and basis, the structure summary, the
+    /// Killing form and its signature, the real form, the quadratic Casimir C2 (built from the inverse Killing form, so it
+    /// acts as 1 on the adjoint of a simple algebra) and the degrees of the independent Casimirs, and the notes.
     /// </summary>
     public static MathNode FromReport(LieAlgebraReport report)
     {
         var rows = new List<IReadOnlyList<MathNode>>();
         void Fact(string words, MathNode value) => rows.Add([MathNodes.Text(words), value]);
 
+        Fact("algebra", MathNodes.Text(report.Algebra.Label));
+        Fact("basis", List(report.Algebra.BasisNames.Select(n => MathNodes.Symbol(n))));
         Fact("structure", FromSummary(report.Summary));
-        Fact("Killing form K(x, y) = tr(ad x ad y)", ConverterRegistry.ToTree(report.KillingForm));
-        Fact("Killing signature (positive, negative, zero)", MathNodes.Text(report.KillingSignature.ToString()));
+        Fact("Killing form", ConverterRegistry.ToTree(report.KillingForm));
+        Fact("Killing signature", FromSignature(report.KillingSignature));
         if (report.RealForm is { } realForm)
         {
             Fact("real form", MathNodes.Text(realForm.Name));
@@ -145,12 +148,12 @@ internal static class AlgebraDisplay
 
         if (report.QuadraticCasimir is { } casimir)
         {
-            Fact("quadratic Casimir (inverse Killing form; 1 on the adjoint of a simple algebra)", ConverterRegistry.ToTree(casimir));
+            Fact("Casimir C2", ConverterRegistry.ToTree(casimir));
         }
 
         if (report.CasimirDegrees is { } degrees)
         {
-            Fact("independent Casimirs (degrees of the basic invariants)", List(degrees.Degrees.Select(d => MathNodes.Integer(d))));
+            Fact("Casimir degrees", List(degrees.Degrees.Select(d => MathNodes.Integer(d))));
         }
 
         foreach (var note in report.Notes)
@@ -158,8 +161,12 @@ internal static class AlgebraDisplay
             Fact("note", MathNodes.Text(note));
         }
 
-        return MathNodes.Row(FromLieAlgebra(report.Algebra), new MatrixNode(rows, FenceKind.Brackets));
+        return new MatrixNode(rows, FenceKind.Brackets);
     }
+
+    /// <summary>A Killing (or other) form signature as "(positive, negative, zero) = (2, 1, 0)".</summary>
+    public static MathNode FromSignature(FormSignature signature) =>
+        MathNodes.Row(MathNodes.Text("(positive, negative, zero)"), MathNodes.Operator("="), MathNodes.Text(signature.ToString()));
 
     private static string Kind(LieAlgebraSummary summary) =>
         summary.IsAbelian ? "abelian (so nilpotent and solvable)"

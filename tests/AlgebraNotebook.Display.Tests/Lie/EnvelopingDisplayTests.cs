@@ -33,7 +33,7 @@ public class LieAlgebraReportDisplayTests
         var sl2 = LieAlgebra<Rational>.FromCommutatorTable("[H, E] = 2 E\n[H, F] = -2 F\n[E, F] = H", ["H", "E", "F"]);
         var report = sl2.Describe();
         var plain = MathDisplay.ToPlainText(report);
-        Assert.Contains("[Killing signature (positive, negative, zero), (2, 1, 0)]", plain);
+        Assert.Contains("[Killing signature, (positive, negative, zero) = (2, 1, 0)]", plain);
         Assert.Contains("[[8, 0, 0], [0, 0, 4], [0, 4, 0]]", plain);
         Assert.Contains("sl(2,R)", plain);
         Assert.Contains("1/8*H^2 + 1/2*E*F - 1/4*H", plain);
