@@ -21,6 +21,8 @@ public class QuadraticCasimirMatrixTests
     [InlineData("G2", new[] { 0, 1 })]
     [InlineData("F4", new[] { 0, 0, 0, 1 })]
     [InlineData("A1+A2", new[] { 2, 1, 0 })]
+    [InlineData("D4", new[] { 0, 0, 0, 1 })]
+    [InlineData("E6", new[] { 1, 0, 0, 0, 0, 0 })]
     public void Casimir_matrix_is_the_scalar_of_the_roots_layer(string type, int[] labels)
     {
         var rep = IrreducibleRepresentation.Of(type, labels);
@@ -39,5 +41,10 @@ public class QuadraticCasimirMatrixTests
         Assert.Equal(new Rational(4, 3), RepresentationMatrices.Of("A2", 1, 0).QuadraticCasimir()[0, 0]);
         Assert.Equal(new Rational(15, 8), RepresentationMatrices.Of("A3", 1, 0, 0).QuadraticCasimir()[2, 2]);
         Assert.Equal(new Rational(4), RepresentationMatrices.Of("G2", 0, 1).QuadraticCasimir()[5, 5]);
+        // E8 adjoint (248): the dual Coxeter number 30 (Humphreys, Reflection Groups, Table 3.1: h = 30, simply laced).
+        var e8 = RepresentationMatrices.Of("E8", 0, 0, 0, 0, 0, 0, 0, 1);
+        Assert.Equal(248, e8.Dimension);
+        var c = e8.QuadraticCasimir();
+        Assert.Equal(Matrix<Rational>.FromFunction(248, 248, (i, j) => i == j ? new Rational(30) : Rational.Zero), c);
     }
 }
