@@ -119,6 +119,59 @@ public class ChevalleyBasisTests
         Assert.Equal(new[] { "h1", "h2", "e_10", "e_01", "e_11", "f_10", "f_01", "f_11" }, basis.BasisNames);
     }
 
+    // The documented sign choice: N_(alpha_i, gamma - alpha_i) = p + 1 > 0 for i the smallest node with gamma - alpha_i
+    // a root (our convention, stated in the class remarks); in A2 this gives [e_10, e_01] = e_11 (common practice for
+    // sl(3) matrix units: [E_12, E_23] = E_13).
+    [Theory]
+    [InlineData("A2")]
+    [InlineData("C3")]
+    [InlineData("G2")]
+    [InlineData("F4")]
+    public void Sign_convention_is_positive_on_the_documented_pairs(string type)
+    {
+        var basis = ChevalleyBasis.Of(type);
+        var system = basis.System;
+        foreach (var root in system.PositiveRoots.Where(r => r.Height > 1))
+        {
+            var gamma = root.SimpleRootCoordinates;
+            var i = Enumerable.Range(0, gamma.Length).First(k =>
+            {
+                if (gamma[k] == 0)
+                {
+                    return false;
+                }
+
+                var c = (int[])gamma.Clone();
+                c[k]--;
+                return system.FindPositiveRoot(c) is not null;
+            });
+            var beta = (int[])gamma.Clone();
+            beta[i]--;
+            var alpha = new int[gamma.Length];
+            alpha[i] = 1;
+            var p = 0;
+            while (true)
+            {
+                var c = (int[])beta.Clone();
+                c[i] -= p + 1;
+                if (c[i] < 0 || system.FindPositiveRoot(c) is null)
+                {
+                    break;
+                }
+
+                p++;
+            }
+
+            Assert.Equal(p + 1, basis.StructureConstant(alpha, beta));
+        }
+
+        if (type == "A2")
+        {
+            var names = basis.BasisNames.ToList();
+            Assert.Equal(new[] { (names.IndexOf("e_11"), 1) }, basis.Bracket(names.IndexOf("e_10"), names.IndexOf("e_01")));
+        }
+    }
+
     // Bad input: unknown types and non-roots are refused with the input in the message.
     [Fact]
     public void Bad_input_is_refused_with_a_message_naming_it()
