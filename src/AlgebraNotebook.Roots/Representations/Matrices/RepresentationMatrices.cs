@@ -194,6 +194,15 @@ public sealed class RepresentationMatrices
 
     internal (SparseOperator E, SparseOperator F) RootVectors(Root root)
     {
+        // The cache is filled lazily; the lock keeps concurrent readers safe (Monitor is re-entrant for the recursion).
+        lock (_rootVectors)
+        {
+            return RootVectorsCore(root);
+        }
+    }
+
+    private (SparseOperator E, SparseOperator F) RootVectorsCore(Root root)
+    {
         if (_rootVectors.TryGetValue(root, out var known))
         {
             return known;
@@ -209,7 +218,7 @@ public sealed class RepresentationMatrices
         else
         {
             var (i, beta, p) = ExtraspecialSplit(System, coords);
-            var (eb, fb) = RootVectors(beta);
+            var (eb, fb) = RootVectorsCore(beta);
             var scale = new Rational(1, p + 1);
             var e = SparseOperator.Commutator(_e[i], eb);
             var f = SparseOperator.Commutator(_f[i], fb);

@@ -103,6 +103,30 @@ public class RepresentationMatricesTests
         Assert.Equal(2, adjoint.Weights.Count(w => w.IsZero));
     }
 
+    // sl(2), highest weight n (Humphreys, Introduction to Lie Algebras, 7.2, from memory): with v_k = f^k v_0 / k!,
+    // e v_k = (n - k + 1) v_(k-1); our basis is w_k = f^k v_0 = k! v_k, so f w_k = w_(k+1) and e w_k = k (n - k + 1) w_(k-1).
+    [Theory]
+    [InlineData(1)]
+    [InlineData(4)]
+    [InlineData(7)]
+    public void Sl2_matrices_match_the_textbook_action(int n)
+    {
+        var m = RepresentationMatrices.Of("A1", n);
+        Assert.Equal(n + 1, m.Dimension);
+        var e = m.E(1);
+        var f = m.F(1);
+        for (var row = 0; row <= n; row++)
+        {
+            for (var col = 0; col <= n; col++)
+            {
+                Assert.Equal(row == col + 1 ? Rational.One : Rational.Zero, f[row, col]);
+                Assert.Equal(row == col - 1 ? new Rational(col * (n - col + 1)) : Rational.Zero, e[row, col]);
+            }
+
+            Assert.Equal(new Weight(n - 2 * row), m.Weights[row]);
+        }
+    }
+
     // G2 has a 7-dimensional irreducible (Bourbaki Plate IX; Humphreys 19.3); the spinor of so(5) = B2 has dimension 4
     // (common practice).
     [Fact]
