@@ -26,6 +26,10 @@ public sealed partial class LieAlgebra<T>
     /// <exception cref="BeyondCapabilityException">See <see cref="CartanSubalgebra"/>.</exception>
     public int Rank => CartanCore().Length;
 
+    // Random elements of the Cartan subalgebra must separate all roots (alpha(x) distinct); with many roots a narrow
+    // coefficient range makes collisions likely (E6 has about 2,500 root differences), so the range grows with the algebra.
+    private int RandomCoefficientBound => Dimension <= 20 ? 20 : 1_000_000;
+
     /// <summary>
     /// The root decomposition of a semisimple algebra with respect to <see cref="CartanSubalgebra"/>. A random element h
     /// of the Cartan subalgebra (fixed seed) is diagonalised; its non-zero eigenvalues must be simple and lie in the field,
@@ -52,7 +56,7 @@ public sealed partial class LieAlgebra<T>
             var x = Vectors<T>.Zero(Dimension);
             foreach (var v in h)
             {
-                Vectors<T>.AddScaled(x, T.FromInteger(random.Next(-20, 21)), v);
+                Vectors<T>.AddScaled(x, T.FromInteger(random.Next(-RandomCoefficientBound, RandomCoefficientBound + 1)), v);
             }
 
             var eigen = FieldOperations<T>.Eigen(AdjointCore(x));
@@ -196,7 +200,7 @@ public sealed partial class LieAlgebra<T>
             var x = Vectors<T>.Zero(Dimension);
             foreach (var v in pool)
             {
-                Vectors<T>.AddScaled(x, T.FromInteger(random.Next(-20, 21)), v);
+                Vectors<T>.AddScaled(x, T.FromInteger(random.Next(-RandomCoefficientBound, RandomCoefficientBound + 1)), v);
             }
 
             tried++;

@@ -18,6 +18,7 @@ public class ChevalleyRoundTripTests
     [InlineData("D4")]
     [InlineData("G2")]
     [InlineData("F4")]
+    [InlineData("E6")]
     [InlineData("B2+A1")]
     public void Root_decomposition_identifies_the_type(string type)
     {
