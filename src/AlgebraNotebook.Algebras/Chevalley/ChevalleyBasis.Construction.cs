@@ -79,21 +79,21 @@ public sealed partial class ChevalleyBasis
         var adjoint = RepresentationMatrices.Of(IrreducibleRepresentation.Of(component, component.HighestRoot.AsWeight), int.MaxValue);
         var size = adjoint.Dimension;
         var local = component.PositiveRoots;
-        var ops = new List<(int Global, Weight Root, Operator Matrix, bool Positive, Rational LengthSquared)>();
+        var ops = new List<(int Global, Weight Root, SparseOperator Matrix, bool Positive, Rational LengthSquared)>();
         foreach (var root in local)
         {
             var global = new int[r];
             root.Coordinates.CopyTo(global.AsSpan(offset));
             var g = new Weight(global);
-            ops.Add((indexOfRoot[g], g, Operator.FromEntries(size, adjoint.RaisingRootVectorEntries(root)), true, root.LengthSquared));
-            ops.Add((indexOfRoot[-g], -g, Operator.FromEntries(size, adjoint.LoweringRootVectorEntries(root)), false, root.LengthSquared));
+            ops.Add((indexOfRoot[g], g, SparseOperator.FromEntries(size, adjoint.RaisingRootVectorEntries(root)), true, root.LengthSquared));
+            ops.Add((indexOfRoot[-g], -g, SparseOperator.FromEntries(size, adjoint.LoweringRootVectorEntries(root)), false, root.LengthSquared));
         }
 
         var byRoot = ops.ToDictionary(o => o.Root, o => o.Matrix);
-        var h = new Operator[component.Rank];
+        var h = new SparseOperator[component.Rank];
         for (var i = 0; i < component.Rank; i++)
         {
-            h[i] = new Operator(size);
+            h[i] = new SparseOperator(size);
             for (var v = 0; v < size; v++)
             {
                 h[i].Add(v, v, adjoint.Weights[v][i]);
@@ -105,14 +105,14 @@ public sealed partial class ChevalleyBasis
             for (var y = x + 1; y < ops.Count; y++)
             {
                 var sum = ops[x].Root + ops[y].Root;
-                var commutator = Operator.Commutator(ops[x].Matrix, ops[y].Matrix);
+                var commutator = SparseOperator.Commutator(ops[x].Matrix, ops[y].Matrix);
                 if (sum.IsZero)
                 {
                     // [x_a, x_-a] = +-h_a with h_a = sum_i c_i h_i, alpha^vee = sum_i (k_i |alpha_i|^2 / |alpha|^2) alpha_i^vee.
                     var alpha = ops[x].Positive ? ops[x].Root : ops[y].Root;
                     var sign = ops[x].Positive ? 1 : -1;
                     var length = ops[x].LengthSquared;
-                    var expected = new Operator(size);
+                    var expected = new SparseOperator(size);
                     var coefficients = new Dictionary<int, Rational>();
                     for (var i = 0; i < component.Rank; i++)
                     {

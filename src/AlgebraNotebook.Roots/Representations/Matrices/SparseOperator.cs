@@ -21,6 +21,18 @@ internal sealed class SparseOperator
 
     internal IReadOnlyDictionary<int, Rational> Column(int column) => _columns[column];
 
+    /// <summary>The operator with the given (row, column, value) entries; repeated positions add up.</summary>
+    internal static SparseOperator FromEntries(int size, IReadOnlyList<(int Row, int Column, Rational Value)> entries)
+    {
+        var op = new SparseOperator(size);
+        foreach (var (row, column, value) in entries)
+        {
+            op.Add(row, column, value);
+        }
+
+        return op;
+    }
+
     internal void Add(int row, int column, Rational value)
     {
         if (value.IsZero)
@@ -100,6 +112,20 @@ internal sealed class SparseOperator
         }
 
         return Matrix<Rational>.FromRows(rows);
+    }
+
+    /// <summary>The factor c with other = c * this, read at the first non-zero entry of this (verified by the caller).</summary>
+    internal Rational RatioTo(SparseOperator other)
+    {
+        for (var j = 0; j < Size; j++)
+        {
+            foreach (var (i, x) in _columns[j])
+            {
+                return (other._columns[j].TryGetValue(i, out var y) ? y : Rational.Zero) / x;
+            }
+        }
+
+        return Rational.Zero;
     }
 
     internal bool SameAs(SparseOperator other)
