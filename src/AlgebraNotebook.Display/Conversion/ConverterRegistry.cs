@@ -44,6 +44,13 @@ internal static class ConverterRegistry
         AddGeneric(typeof(UnivariatePolynomial<>), Method(typeof(MatrixConverters), nameof(MatrixConverters.FromUnivariatePolynomial)));
         AddGeneric(typeof(TruncatedSeries<>), Method(typeof(SeriesConverters), nameof(SeriesConverters.FromTruncatedSeries)));
 
+        // Results of the exact core's linear algebra and relations (converters in Display/Exact).
+        AddGeneric(typeof(Eigenvalue<>), Method(typeof(global::AlgebraNotebook.Display.Exact.EigenDecompositionConverters), "FromEigenvalue"));
+        AddGeneric(typeof(EigenDecomposition<>), Method(typeof(global::AlgebraNotebook.Display.Exact.EigenDecompositionConverters), "FromEigenDecomposition"));
+        AddGeneric(typeof(SolutionSet<>), Method(typeof(global::AlgebraNotebook.Display.Exact.SolutionSetConverters), "FromSolutionSet"));
+        AddGeneric(typeof(QuotientRing<>), Method(typeof(global::AlgebraNotebook.Display.Exact.QuotientRingConverters), "FromQuotientRing"));
+        AddExact<GroebnerStatistics>(global::AlgebraNotebook.Display.Exact.QuotientRingConverters.FromGroebnerStatistics);
+
         // Algebras layer (converters in Display/Lie).
         AddGeneric(typeof(LieElement<>), Method(typeof(LieConverters), nameof(LieConverters.FromLieElement)));
         AddExact<LieAlgebraReport>(AlgebraDisplay.FromReport);

@@ -13,16 +13,6 @@ namespace AlgebraNotebook.Display.Lie;
 /// </summary>
 public static class GroupDisplay
 {
-    /// <summary>Registers the converters with <see cref="MathDisplay"/> (idempotent).</summary>
-    public static void Register()
-    {
-        MathDisplay.Register<FunctionLegend>(FromLegend);
-        MathDisplay.Register<ParameterFunction>(FromParameterFunction);
-        MathDisplay.RegisterGeneric(typeof(MatrixExponential<>), typeof(GroupDisplay).GetMethod(nameof(FromMatrixExponential))!);
-        MathDisplay.RegisterGeneric(typeof(GroupElement<>), typeof(GroupDisplay).GetMethod(nameof(FromGroupElement))!);
-        MathDisplay.RegisterGeneric(typeof(ExponentialCoordinates<>), typeof(GroupDisplay).GetMethod(nameof(FromExponentialCoordinates))!);
-    }
-
     /// <summary>"c_t = cos(t)": the symbol, an equals sign and the function applied to rate times parameter.</summary>
     public static MathNode FromParameterFunction(ParameterFunction function)
     {

@@ -12,14 +12,6 @@ namespace AlgebraNotebook.Display.Lie;
 /// </summary>
 public static class LieDisplay
 {
-    /// <summary>Registers the converters with <see cref="MathDisplay"/> (idempotent).</summary>
-    public static void Register()
-    {
-        MathDisplay.Register<LieSeries>(FromLieSeries);
-        MathDisplay.Register<BracketTree>(FromBracketTree);
-        MathDisplay.Register<ZassenhausExponents>(FromZassenhaus);
-    }
-
     /// <summary>The display tree of a Lie series: the sum of coefficient times bracket, then the order term.</summary>
     public static MathNode FromLieSeries(LieSeries series)
     {

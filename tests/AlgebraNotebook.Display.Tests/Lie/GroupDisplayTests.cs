@@ -8,8 +8,6 @@ namespace AlgebraNotebook.Display.Tests.Lie;
 [Collection(RegistryCollection.Name)]
 public class GroupDisplayTests
 {
-    public GroupDisplayTests() => GroupDisplay.Register();
-
     [Fact]
     public void Rotation_exponential_with_legend_matches_approved_outputs()
     {

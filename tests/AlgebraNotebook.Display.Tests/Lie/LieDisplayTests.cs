@@ -7,11 +7,6 @@ namespace AlgebraNotebook.Display.Tests.Lie;
 [Collection(RegistryCollection.Name)]
 public class LieDisplayTests
 {
-    public LieDisplayTests()
-    {
-        LieDisplay.Register();
-    }
-
     [Fact]
     public void Truncated_BCH_series_reads_as_nested_commutators_with_an_order_term()
     {
