@@ -1,6 +1,7 @@
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Parsing;
 using AlgebraNotebook.Runner.Documents;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -37,7 +38,9 @@ public static class CatalogueCheck
     /// Runs the call and checks: it throws (so no partial object escapes), the exception has exactly the expected
     /// documented type, and the message contains every expected word.
     /// </summary>
-    public static void Refuses(BadInput entry)
+    /// <param name="entry">The catalogue entry.</param>
+    /// <param name="output">Receives the message the user would see, so the test log doubles as a review of the messages.</param>
+    public static void Refuses(BadInput entry, ITestOutputHelper output)
     {
         Assert.Contains(entry.Expected, Documented);
         object? returned;
@@ -48,6 +51,7 @@ public static class CatalogueCheck
         catch (Exception exception)
         {
             var actual = exception is AggregateException { InnerExceptions.Count: 1 } aggregate ? aggregate.InnerExceptions[0] : exception;
+            output.WriteLine($"{entry.EntryPoint}({entry.Input}) -> {actual.GetType().Name}: {actual.Message}");
             Assert.True(
                 actual.GetType() == entry.Expected,
                 $"{entry}: expected {entry.Expected.Name} but got {actual.GetType().Name}: {actual.Message}\n{actual.StackTrace}");

@@ -3,6 +3,7 @@ using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Groups.Elements;
 using AlgebraNotebook.Groups.Exponential;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -11,7 +12,7 @@ namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 /// defined for square matrices; the series log(I + A) diverges when an eigenvalue of A has modulus at least 1;
 /// SU(2) matrices are unitary with determinant 1); the expected exception types are those documented on each entry point.
 /// </summary>
-public sealed class GroupCatalogue
+public sealed class GroupCatalogue(ITestOutputHelper output)
 {
     private static Matrix<Rational> M(string text) => Matrix.ParseRational(text);
 
@@ -65,5 +66,5 @@ public sealed class GroupCatalogue
     /// <summary>Each entry is refused with its documented exception and a message naming the input.</summary>
     [Theory]
     [MemberData(nameof(Names))]
-    public void Bad_group_input_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name));
+    public void Bad_group_input_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name), output);
 }

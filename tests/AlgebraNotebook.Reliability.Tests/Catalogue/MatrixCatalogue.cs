@@ -2,6 +2,7 @@ using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Parsing;
 using AlgebraNotebook.Exact.Scalars;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -10,7 +11,7 @@ namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 /// mismatches. What makes each input bad is common practice of linear algebra; the expected exception types are
 /// those documented on Matrix, Matrix&lt;T&gt;, LinearAlgebra and Eigenvalues.
 /// </summary>
-public sealed class MatrixCatalogue
+public sealed class MatrixCatalogue(ITestOutputHelper output)
 {
     private static Matrix<Rational> M(string text) => Matrix.ParseRational(text);
 
@@ -55,5 +56,5 @@ public sealed class MatrixCatalogue
     /// <summary>Each entry is refused with its documented exception and a message naming the input.</summary>
     [Theory]
     [MemberData(nameof(Names))]
-    public void Bad_matrix_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name));
+    public void Bad_matrix_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name), output);
 }

@@ -1,4 +1,5 @@
 using AlgebraNotebook.Runner.Documents;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -7,7 +8,7 @@ namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 /// nbformat 4 specification (open standard: a JSON object with "nbformat": 4, "nbformat_minor", "metadata" and a
 /// "cells" array of objects with "cell_type" and "source"); the expected exception is NotebookLoadException as documented.
 /// </summary>
-public sealed class NotebookFileCatalogue
+public sealed class NotebookFileCatalogue(ITestOutputHelper output)
 {
     private const string Cell = """{"cell_type": "code", "source": "1 + 1", "metadata": {}, "outputs": [], "execution_count": null}""";
 
@@ -46,5 +47,5 @@ public sealed class NotebookFileCatalogue
     /// <summary>Each entry is refused with its documented exception and a message naming the file.</summary>
     [Theory]
     [MemberData(nameof(Names))]
-    public void Bad_notebook_file_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name));
+    public void Bad_notebook_file_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name), output);
 }

@@ -2,6 +2,7 @@ using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Parsing;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Operators;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -10,7 +11,7 @@ namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 /// each input bad is common practice (a derivative is taken in a declared coordinate; d/dx of x is 1; a span of
 /// vector fields is a Lie algebra only when closed); the expected exception types are those documented on each entry point.
 /// </summary>
-public sealed class OperatorCatalogue
+public sealed class OperatorCatalogue(ITestOutputHelper output)
 {
     // One ring object per coordinate system: operators over two separately built rings cannot be combined.
     private static readonly CoefficientRing<Rational> Plane = CoordinateSystems.CartesianPlane<Rational>();
@@ -49,7 +50,8 @@ public sealed class OperatorCatalogue
         Entry.Of("operator_imaginary_over_rationals", "DifferentialOperator.Parse", "\"i*d_x\"", typeof(ExactParseException), () => Op("i*d_x"), "\"i*d_x\""),
         Entry.Of("operator_divide_by_zero", "DifferentialOperator.Parse", "\"d_x/0\"", typeof(ExactParseException), () => Op("d_x/0"), "\"d_x/0\""),
         Entry.Of("operator_empty", "DifferentialOperator.Parse", "\"\"", typeof(ExactParseException), () => Op(""), "\"\""),
-        Entry.Of("operator_bare_d", "DifferentialOperator.Parse", "\"d_\"", typeof(ExactParseException), () => Op("d_"), "\"d_\""),
+        // Regression: "d_" used to report "d_:  is not a coordinate" with an empty name.
+        Entry.Of("operator_bare_d", "DifferentialOperator.Parse", "\"d_\"", typeof(ExactParseException), () => Op("d_"), "\"d_\"", "d_ must be followed by a coordinate", "x, y"),
         Entry.Of("partial_unknown_coordinate", "DifferentialOperator.Partial", "\"z\" over (x, y)", typeof(ExactArgumentException),
             () => DifferentialOperator<Rational>.Partial(Plane, "z"), "\"z\"", "x, y"),
         Entry.Of("operator_pow_negative", "DifferentialOperator.Pow", "d_x ^ -2", typeof(ExactArgumentException), () => Op("d_x").Pow(-2), "-2"),
@@ -66,8 +68,13 @@ public sealed class OperatorCatalogue
             () => CoordinateChange<Rational>.FromCoordinateFormulas(Plane, CoordinateSystems.Polar<Rational>(), new Dictionary<string, string> { ["x"] = "r*cp" }), "y"),
         Entry.Of("coordinate_change_unknown_source", "CoordinateChange.FromCoordinateFormulas", "formula for \"q\" (not a source symbol)", typeof(ExactArgumentException),
             () => CoordinateChange<Rational>.FromCoordinateFormulas(Plane, CoordinateSystems.Polar<Rational>(), new Dictionary<string, string> { ["x"] = "r*cp", ["y"] = "r*sp", ["q"] = "r" }), "q"),
+        // Regression: a wrong target ring used to fail deep inside with "The coefficient cp*r uses cp, which is not declared".
         Entry.Of("coordinate_change_wrong_rings", "CoordinateSystems.CartesianToPolar", "(space, space)", typeof(ExactArgumentException),
-            () => CoordinateSystems.CartesianToPolar(Space, Space), "ring"),
+            () => CoordinateSystems.CartesianToPolar(Space, Space), "CartesianToPolar", "Cartesian (x, y, z)", "lacks r, cp, sp", "CoordinateSystems.Polar"),
+        Entry.Of("coordinate_change_wrong_source", "CoordinateSystems.CartesianToCylindrical", "(plane, cylindrical)", typeof(ExactArgumentException),
+            () => CoordinateSystems.CartesianToCylindrical(Plane, CoordinateSystems.Cylindrical<Rational>()), "Cartesian plane (x, y)", "lacks z"),
+        Entry.Of("coordinate_change_spherical_target", "CoordinateSystems.CartesianToSpherical", "(space, polar)", typeof(ExactArgumentException),
+            () => CoordinateSystems.CartesianToSpherical(Space, CoordinateSystems.Polar<Rational>()), "polar (r, phi)", "lacks st, ct"),
         Entry.Of("span_empty", "new OperatorSpan", "{}", typeof(ExactArgumentException), () => new OperatorSpan<Rational>([]), "at least one operator"),
         Entry.Of("span_repeated_name", "new OperatorSpan", "{(P, d_x), (P, d_y)}", typeof(ExactArgumentException),
             () => new OperatorSpan<Rational>([("P", Op("d_x")), ("P", Op("d_y"))]), "\"P\""),
@@ -87,5 +94,5 @@ public sealed class OperatorCatalogue
     /// <summary>Each entry is refused with its documented exception and a message naming the input.</summary>
     [Theory]
     [MemberData(nameof(Names))]
-    public void Bad_operator_input_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name));
+    public void Bad_operator_input_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name), output);
 }

@@ -3,6 +3,7 @@ using AlgebraNotebook.Exact.Parsing;
 using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Symbols;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -11,7 +12,7 @@ namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 /// What makes each input bad is common practice (polynomial grammar, non-negative integer powers, a ring where
 /// 1 = 0 is no ring); the expected exception types are those documented on each entry point.
 /// </summary>
-public sealed class PolynomialCatalogue
+public sealed class PolynomialCatalogue(ITestOutputHelper output)
 {
     private static readonly Symbol X = Symbol.Of("x");
 
@@ -62,5 +63,5 @@ public sealed class PolynomialCatalogue
     /// <summary>Each entry is refused with its documented exception and a message naming the input.</summary>
     [Theory]
     [MemberData(nameof(Names))]
-    public void Bad_polynomial_or_relation_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name));
+    public void Bad_polynomial_or_relation_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name), output);
 }

@@ -2,6 +2,7 @@ using AlgebraNotebook.Exact;
 using AlgebraNotebook.Roots;
 using AlgebraNotebook.Roots.Representations;
 using AlgebraNotebook.Roots.Representations.Matrices;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -11,7 +12,7 @@ namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 /// or 3 by convention, E only 6, 7, 8, F only 4, G only 2; highest weights of irreducible finite-dimensional
 /// representations are dominant). The expected exception types are those documented on each entry point.
 /// </summary>
-public sealed class RootCatalogue
+public sealed class RootCatalogue(ITestOutputHelper output)
 {
     private static RootSystem A2 => RootSystem.Of("A2");
 
@@ -83,5 +84,5 @@ public sealed class RootCatalogue
     /// <summary>Each entry is refused with its documented exception and a message naming the input.</summary>
     [Theory]
     [MemberData(nameof(Names))]
-    public void Bad_type_weight_or_representation_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name));
+    public void Bad_type_weight_or_representation_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name), output);
 }

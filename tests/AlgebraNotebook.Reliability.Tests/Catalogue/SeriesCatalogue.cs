@@ -4,6 +4,7 @@ using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Series;
 using AlgebraNotebook.Groups.FreeLie;
 using AlgebraNotebook.Groups.Series;
+using Xunit.Abstractions;
 
 namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 
@@ -13,7 +14,7 @@ namespace AlgebraNotebook.Reliability.Tests.Catalogue;
 /// word is strictly smaller than its proper rotations); the expected exception types are those documented on each
 /// entry point.
 /// </summary>
-public sealed class SeriesCatalogue
+public sealed class SeriesCatalogue(ITestOutputHelper output)
 {
     private static FreeLieAlgebra XY => new("X", "Y");
 
@@ -49,7 +50,8 @@ public sealed class SeriesCatalogue
         Entry.Of("free_parse_empty", "FreeLieAlgebra.Parse", "\"\"", typeof(ExactParseException), () => XY.Parse(""), "\"\""),
         Entry.Of("bracket_tree_parse_garbage", "BracketTree.Parse", "\"[X,, Y]\"", typeof(ExactParseException), () => BracketTree.Parse("[X,, Y]"), "\"[X,, Y]\""),
         Entry.Of("lyndon_not_lyndon", "LyndonWord.Create", "YX (letters 1, 0)", typeof(ExactArgumentException), () => LyndonWord.Create(new Word([1, 0])), "Lyndon"),
-        Entry.Of("lyndon_empty", "LyndonWord.Create", "empty word", typeof(ExactArgumentException), () => LyndonWord.Create(Word.Empty), "empty"),
+        // Regression: the empty word used to be shown as "The word 1 is not a Lyndon word".
+        Entry.Of("lyndon_empty", "LyndonWord.Create", "empty word", typeof(ExactArgumentException), () => LyndonWord.Create(Word.Empty), "empty word", "at least one letter"),
         Entry.Of("lyndon_enumerate_degree_zero", "LyndonWord.Enumerate", "(2, 0)", typeof(ExactArgumentException), () => LyndonWord.Enumerate(2, 0).ToList(), "0"),
         Entry.Of("witt_count_alphabet_zero", "LyndonWord.CountByWitt", "(0, 3)", typeof(ExactArgumentException), () => LyndonWord.CountByWitt(0, 3), "0"),
         Entry.Of("free_basis_element_not_lyndon", "FreeLieAlgebra.BasisElement", "(Y, X)", typeof(ExactArgumentException), () => XY.BasisElement("Y", "X"), "Lyndon"),
@@ -71,5 +73,5 @@ public sealed class SeriesCatalogue
     /// <summary>Each entry is refused with its documented exception and a message naming the input.</summary>
     [Theory]
     [MemberData(nameof(Names))]
-    public void Bad_series_request_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name));
+    public void Bad_series_request_is_refused_with_a_named_error(string name) => CatalogueCheck.Refuses(CatalogueCheck.Find(Entries, name), output);
 }
