@@ -49,13 +49,13 @@ public sealed class BracketProperties(ITestOutputHelper output)
     /// derived algebra and of the centre, rank of the Killing form, solvability and nilpotency are invariant).
     /// </summary>
     [Theory]
-    [InlineData("sl2")]
-    [InlineData("so3")]
-    [InlineData("heisenberg3")]
-    [InlineData("euclidean2")]
-    [InlineData("sl3")]
-    [InlineData("galilei")]
-    public void Known_algebra_keeps_its_invariants_after_a_random_change_of_basis(string name)
+    [InlineData("sl2", 11u)]
+    [InlineData("so3", 12u)]
+    [InlineData("heisenberg3", 13u)]
+    [InlineData("euclidean2", 14u)]
+    [InlineData("sl3", 15u)]
+    [InlineData("galilei", 16u)]
+    public void Known_algebra_keeps_its_invariants_after_a_random_change_of_basis(string name, uint stream)
     {
         var algebra = name switch
         {
@@ -68,7 +68,7 @@ public sealed class BracketProperties(ITestOutputHelper output)
         };
         var n = algebra.Dimension;
         var iterations = n > 6 ? 4 : 12;
-        var checkedCount = PropertyCheck.ForAll(RandomExact.Unimodular(n), iterations, (uint)(10 + name.Length), p =>
+        var checkedCount = PropertyCheck.ForAll(RandomExact.Unimodular(n), iterations, stream, p =>
         {
             var q = LinearAlgebra.Inverse(p);
             var constants = new Rational[n, n, n];
