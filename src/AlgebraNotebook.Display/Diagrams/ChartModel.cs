@@ -53,7 +53,7 @@ public sealed class ChartModel
     }
 
     // Non-ASCII text (Greek letters, subscripts) stays as UTF-8; HTML-sensitive characters (<, >, &, quotes) are still escaped.
-    private static readonly JsonWriterOptions WriterOptions = new() { Encoder = JavaScriptEncoder.Create(UnicodeRanges.All) };
+    internal static readonly JsonWriterOptions WriterOptions = new() { Encoder = JavaScriptEncoder.Create(UnicodeRanges.All) };
 
     /// <summary>The title.</summary>
     public string Title { get; }
@@ -68,7 +68,8 @@ public sealed class ChartModel
     public IReadOnlyList<ChartTrace> Traces { get; }
 
     /// <summary>
-    /// The plotly.js figure as JSON text: {"data": [...], "layout": {...}, "config": {...}}. Coordinates are rounded to
+    /// The plotly.js figure as JSON text: {"data": [...], "layout": {...}, "algebranotebook": {title, caption,
+    /// dimensions}, "config": {...}} (plotly.js reads data, layout and config; the middle object is ours). Coordinates are rounded to
     /// 5 decimals; 2D charts keep equal scales on both axes, 3D charts use the data's own aspect. Characters that could
     /// end a script element or an attribute (&lt;, &gt;, &amp;, quotes) are escaped as \uXXXX; other text stays UTF-8.
     /// </summary>
@@ -86,6 +87,11 @@ public sealed class ChartModel
 
             json.WriteEndArray();
             WriteLayout(json);
+            json.WriteStartObject(ChartFragment.MetadataProperty);
+            json.WriteString("title", Title);
+            json.WriteString("caption", Caption);
+            json.WriteNumber("dimensions", Dimensions);
+            json.WriteEndObject();
             json.WriteStartObject("config");
             json.WriteBoolean("displaylogo", false);
             json.WriteBoolean("responsive", true);
@@ -97,33 +103,17 @@ public sealed class ChartModel
     }
 
     /// <summary>
-    /// An HTML fragment that draws the chart: a &lt;figure&gt; holding the chart element (class
-    /// <see cref="ChartLibrary.ChartClass"/>, with a short text shown until the chart is drawn), the caption, and an
-    /// inline script. The script draws at once when window.Plotly exists and otherwise waits for
-    /// <see cref="ChartLibrary.ScriptElement"/>. With <paramref name="includeLibrary"/> the library element comes first.
+    /// An HTML fragment that draws the chart (see <see cref="ChartFragment"/>): a &lt;figure&gt; holding the chart
+    /// element (class <see cref="ChartLibrary.ChartClass"/>, with a short text shown until the chart is drawn), the
+    /// caption, the figure JSON as data, and an inline script that draws it at once when window.Plotly exists and
+    /// otherwise waits for <see cref="ChartLibrary.ScriptElement"/>. With <paramref name="includeLibrary"/> the library
+    /// element comes first.
     /// </summary>
     /// <param name="includeLibrary">Whether to put a copy of the chart library in front of the chart.</param>
     public string ToHtml(bool includeLibrary)
     {
-        var html = new StringBuilder();
-        if (includeLibrary)
-        {
-            html.Append(ChartLibrary.ScriptElement).Append('\n');
-        }
-
-        html.Append("<figure class=\"algebranotebook-figure\" style=\"margin:.5rem 0\">")
-            .Append("<div class=\"").Append(ChartLibrary.ChartClass).Append("\" style=\"width:100%;max-width:720px;height:")
-            .Append(Dimensions == 3 ? "560" : "520").Append("px\">");
-        XmlText.Append(html, $"Chart \"{Title}\": drawn by the chart library bundled with AlgebraNotebook once scripts run in this page.");
-        html.Append("</div><figcaption style=\"font-size:.85em;color:#4a4f55\">");
-        XmlText.Append(html, Caption);
-        html.Append("</figcaption><script>(function(s){var el=s.parentNode.querySelector('.")
-            .Append(ChartLibrary.ChartClass).Append("');var fig=")
-            .Append(ToFigureJson())
-            .Append(";function draw(){el.textContent='';Plotly.newPlot(el,fig.data,fig.layout,fig.config);}")
-            .Append("if(window.Plotly){draw();}else{(window.algebraNotebookPending=window.algebraNotebookPending||[]).push(draw);}")
-            .Append("})(document.currentScript);</script></figure>");
-        return html.ToString();
+        var fragment = ChartFragment.Write(ToFigureJson(), Title, Caption, Dimensions);
+        return includeLibrary ? ChartLibrary.ScriptElement + "\n" + fragment : fragment;
     }
 
     /// <summary>The title, dimension and trace summary, e.g. "Roots of G2 (2D): long roots: 6 points; short roots: 6 points".</summary>
