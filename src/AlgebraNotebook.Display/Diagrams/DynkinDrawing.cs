@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using AlgebraNotebook.Display.Rendering;
 using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Parsing;
 using AlgebraNotebook.Roots;
 
 namespace AlgebraNotebook.Display.Diagrams;
@@ -22,13 +23,19 @@ public sealed class DynkinDrawing
     private const double Margin = 28;
     private const double BondGap = 4;
 
+    private const string FigureStart = "<div class=\"algebranotebook-dynkin-figure\" data-type=\"";
+
     private readonly IReadOnlyList<int>? _marks;
 
-    private DynkinDrawing(DynkinDiagram diagram, IReadOnlyList<int>? marks)
+    private DynkinDrawing(DynkinDiagram diagram, IReadOnlyList<int>? marks, CartanType type)
     {
         Diagram = diagram;
         _marks = marks;
+        Type = type;
     }
+
+    /// <summary>The Cartan type drawn.</summary>
+    public CartanType Type { get; }
 
     /// <summary>The diagram drawn (nodes, edges and layout from AlgebraNotebook.Roots).</summary>
     public DynkinDiagram Diagram { get; }
@@ -50,7 +57,7 @@ public sealed class DynkinDrawing
     public static DynkinDrawing Of(RootSystem system)
     {
         ArgumentNullException.ThrowIfNull(system);
-        return new DynkinDrawing(system.Diagram, null);
+        return new DynkinDrawing(system.Diagram, null, system.Type);
     }
 
     /// <summary>The extended (affine) Dynkin diagram of a simple type given as text, e.g. "E8" or "C3".</summary>
@@ -69,7 +76,7 @@ public sealed class DynkinDrawing
     {
         ArgumentNullException.ThrowIfNull(system);
         var extended = system.ExtendedDiagram;
-        return new DynkinDrawing(extended.Diagram, extended.Marks);
+        return new DynkinDrawing(extended.Diagram, extended.Marks, system.Type);
     }
 
     /// <summary>
@@ -128,8 +135,47 @@ public sealed class DynkinDrawing
         return svg.ToString();
     }
 
-    /// <summary>The SVG inside a &lt;div class="algebranotebook-dynkin-figure"&gt;, for HTML outputs.</summary>
-    public string ToHtml() => "<div class=\"algebranotebook-dynkin-figure\">" + ToSvg() + "</div>";
+    /// <summary>
+    /// The SVG inside a &lt;div class="algebranotebook-dynkin-figure" data-type="B3" data-extended="false"&gt;, for HTML
+    /// outputs; the attributes let <see cref="Rebuild"/> draw it again from a stored notebook.
+    /// </summary>
+    public string ToHtml() =>
+        FigureStart + Type + "\" data-extended=\"" + (IsExtended ? "true" : "false") + "\">" + ToSvg() + "</div>";
+
+    /// <summary>
+    /// Draws again a diagram stored by <see cref="ToHtml"/> (for example in a notebook written by someone else): only the
+    /// data-type and data-extended attributes at the start are read, the type is parsed, and a fresh drawing is made;
+    /// the stored markup itself is never reused. Returns null when the text does not start like a stored drawing or the
+    /// type does not parse.
+    /// </summary>
+    /// <param name="storedHtml">The stored text/html output.</param>
+    public static DynkinDrawing? Rebuild(string storedHtml)
+    {
+        ArgumentNullException.ThrowIfNull(storedHtml);
+        var text = storedHtml.TrimStart();
+        if (!text.StartsWith(FigureStart, StringComparison.Ordinal))
+        {
+            return null;
+        }
+
+        var end = text.IndexOf('"', FigureStart.Length);
+        const string extendedTrue = "\" data-extended=\"true\"";
+        if (end < 0 || end - FigureStart.Length > 60)
+        {
+            return null;
+        }
+
+        try
+        {
+            var type = CartanType.Parse(text[FigureStart.Length..end]);
+            var system = RootSystem.Of(type);
+            return string.CompareOrdinal(text, end, extendedTrue, 0, extendedTrue.Length) == 0 ? Extended(system) : Of(system);
+        }
+        catch (Exception e) when (e is ExactArgumentException or ExactParseException or BeyondCapabilityException)
+        {
+            return null;
+        }
+    }
 
     /// <summary>The plain-text diagram, e.g. "B3: 1-2, 2=&gt;3" (see <see cref="DynkinDiagram.ToString"/>).</summary>
     public override string ToString() => IsExtended ? $"{Diagram}; marks {string.Join(", ", _marks!)}" : Diagram.ToString();

@@ -73,6 +73,18 @@ public class DynkinDrawingTests
         Assert.Contains("A2+A1", error.Message);
     }
 
+    [Fact]
+    public void A_stored_drawing_is_drawn_again_from_its_type_only()
+    {
+        var stored = DynkinDrawing.Extended("C3").ToHtml();
+        Assert.Equal(stored, DynkinDrawing.Rebuild(stored)!.ToHtml());
+        // Markup after the attributes is never reused; an unparseable type gives null.
+        var tampered = stored.Replace("<title>", "<script>alert(1)</script><title>", StringComparison.Ordinal);
+        Assert.DoesNotContain("alert", DynkinDrawing.Rebuild(tampered)!.ToHtml());
+        Assert.Null(DynkinDrawing.Rebuild("<div class=\"algebranotebook-dynkin-figure\" data-type=\"E9\" data-extended=\"false\"></div>"));
+        Assert.Null(DynkinDrawing.Rebuild("<p>other</p>"));
+    }
+
     private static Dictionary<int, double> NodeCentres(XElement svg) =>
         svg.Descendants(Svg + "g").Where(g => (string?)g.Attribute("class") == "node")
             .ToDictionary(g => int.Parse((string)g.Attribute("data-node")!), g => double.Parse((string)g.Elements(Svg + "circle").Last().Attribute("cx")!));
