@@ -7,7 +7,7 @@ namespace AlgebraNotebook.Display.Diagrams;
 /// An interactive picture of a root system: rank 2 in the plane, rank 3 in space, simple types of rank 4 or more
 /// projected to the Coxeter plane (see the caption of <see cref="Chart"/>). Long and short roots have their own colours,
 /// the simple roots are larger diamonds labelled α₁, α₂, ...; hovering over a root shows it in simple-root
-/// coordinates with its squared length (long roots 2) and height. Optionally (rank 2 only) the walls of the Weyl
+/// coordinates (up to rank 3 also written out as a combination) with its squared length (long roots 2) and height. Optionally (rank 2 only) the walls of the Weyl
 /// chambers, the lines orthogonal to the simple roots, are drawn dashed, with the dominant chamber labelled.
 /// </summary>
 /// <example><c>RootDiagram.Of("G2", chamberWalls: true)</c></example>
@@ -59,10 +59,16 @@ public sealed class RootDiagram
             var coordinates = root.SimpleRootCoordinates;
             var place = geometry.Place(coordinates.Select(c => (double)c).ToArray());
             var label = root.IsSimple ? DiagramText.SimpleRoot(Array.IndexOf(coordinates, 1) + 1) : string.Empty;
-            var hover = string.Join("\n",
-                $"root {DiagramText.Combination(coordinates)}",
-                $"simple-root coordinates [{string.Join(", ", coordinates)}]",
-                $"|β|² = {root.LengthSquared} ({(root.IsLong ? "long" : "short")}), height {root.Height}");
+            // Up to rank 3 the root is also written out as a combination; beyond, the coordinates alone keep charts small.
+            var lines = new List<string>();
+            if (system.Rank <= 3)
+            {
+                lines.Add($"root {DiagramText.Combination(coordinates)}");
+            }
+
+            lines.Add($"simple-root coordinates [{string.Join(", ", coordinates)}]");
+            lines.Add($"|β|² = {root.LengthSquared} ({(root.IsLong ? "long" : "short")}), height {root.Height}");
+            var hover = string.Join("\n", lines);
             var point = new ChartPoint(place[0], place[1], place.Length > 2 ? place[2] : 0, label, hover);
             (root.IsSimple ? simpleRoots : root.IsLong ? longRoots : shortRoots).Add(point);
         }
