@@ -2,7 +2,6 @@ using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using System.Text.Unicode;
-using AlgebraNotebook.Display.Rendering;
 using AlgebraNotebook.Exact;
 
 namespace AlgebraNotebook.Display.Diagrams;

@@ -20,6 +20,7 @@ public class RootDiagramTests
     [InlineData("E7", 126)]
     [InlineData("E8", 240)]
     [InlineData("A1+A1", 4)]
+    [InlineData("A1", 2)]
     public void One_point_is_drawn_per_root(string type, int roots)
     {
         var chart = RootDiagram.Of(type).Chart;
@@ -87,11 +88,13 @@ public class RootDiagramTests
     }
 
     [Theory]
-    // Coxeter numbers: A5 6, B4 8, D5 8, F4 12, E6 12, E7 18, E8 30 (Humphreys, Introduction to Lie Algebras, 12
+    // Coxeter numbers: A5 6, B4 8, C4 8, D4 6, D5 8, F4 12, E6 12, E7 18, E8 30 (Humphreys, Introduction to Lie Algebras, 12
     // exercises / Bourbaki Plates); the Coxeter element acts on its plane by a rotation through 2 pi / h
     // (Humphreys, Reflection Groups and Coxeter Groups, 3.17, from memory), so the projected roots are invariant.
     [InlineData("A5", 6)]
     [InlineData("B4", 8)]
+    [InlineData("C4", 8)]
+    [InlineData("D4", 6)]
     [InlineData("D5", 8)]
     [InlineData("F4", 12)]
     [InlineData("E6", 12)]

@@ -87,6 +87,19 @@ public class WeightDiagramTests
     }
 
     [Fact]
+    public void F4_twenty_six_is_projected_to_the_coxeter_plane_with_the_zero_weight_doubled()
+    {
+        // The 26 of F4, highest weight omega_4: the 24 short roots and the zero weight with multiplicity 2
+        // (common practice; Bourbaki, Plate VIII, the short roots of F4).
+        var diagram = WeightDiagram.Of(IrreducibleRepresentation.Of("F4", 0, 0, 0, 1));
+        Assert.Equal(2, diagram.Chart.Dimensions);
+        Assert.Equal(25, ChartPoints.Markers(diagram.Chart).Count());
+        Assert.Contains("Coxeter plane", diagram.Chart.Caption);
+        var zero = ChartPoints.Markers(diagram.Chart).Single(p => p.Hover.Contains("weight (0, 0, 0, 0)"));
+        Assert.Equal("2", zero.Label);
+    }
+
+    [Fact]
     public void Factors_of_different_root_systems_are_refused()
     {
         var error = Assert.Throws<ExactArgumentException>(() =>
