@@ -41,7 +41,9 @@ public static class ChartFragment
         html.Append("<figure class=\"").Append(FigureClass).Append("\" style=\"margin:.5rem 0\">")
             .Append("<div class=\"").Append(ChartLibrary.ChartClass).Append("\" style=\"width:100%;max-width:720px;height:")
             .Append(dimensions == 3 ? "560" : "520").Append("px\">");
-        XmlText.Append(html, $"Chart \"{title}\": drawn by the chart library bundled with AlgebraNotebook once scripts run in this page.");
+        XmlText.Append(html, $"Chart \"{title}\": drawn by the chart library bundled with AlgebraNotebook once scripts run in this page. " +
+            "If this text stays, scripts are off here (an untrusted notebook, for example) or the page holds no copy of the library yet: " +
+            "running any chart cell in a new session adds one, and every waiting chart is then drawn.");
         html.Append("</div><figcaption style=\"font-size:.85em;color:#4a4f55\">");
         XmlText.Append(html, caption);
         html.Append("</figcaption><script type=\"application/json\" class=\"").Append(DataClass).Append("\">")
