@@ -44,7 +44,8 @@ public static class AlgebraNotebookFormatters
     /// <summary>
     /// Registers the formatters and preferred MIME types for every type in <see cref="RegisteredTypes"/>. Each call
     /// registers again (the newest registration wins), so it also restores the formatters after
-    /// <see cref="Formatter.ResetToDefault"/>; call it once per kernel or host, not per value.
+    /// <see cref="Formatter.ResetToDefault"/>; call it once per kernel or host, not per value. The diagram formatters
+    /// (<see cref="DiagramFormatters"/>) are registered too.
     /// </summary>
     public static void Register()
     {
@@ -56,6 +57,8 @@ public static class AlgebraNotebookFormatters
                 Formatter.Register(type, (FormatDelegate<object>)WritePlainText, PlainTextMimeType);
                 Formatter.SetPreferredMimeTypesFor(type, HtmlMimeType, PlainTextMimeType);
             }
+
+            DiagramFormatters.Register();
         }
     }
 

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using AlgebraNotebook.Display.Diagrams;
 using AlgebraNotebook.Runner.Documents;
 using AlgebraNotebook.Runner.Execution;
 
@@ -12,9 +13,11 @@ namespace AlgebraNotebook.Runner.Reporting;
 /// </summary>
 /// <remarks>
 /// The report opens offline: the only style is the inline stylesheet below, nothing is loaded from a network and a
-/// Content-Security-Policy forbids scripts and external resources. Plain text (sources, standard output, plain-text
-/// values, failure messages) is always HTML-escaped; text/html outputs are formatter output and embedded as they are
-/// (MathML renders natively in current browsers).
+/// Content-Security-Policy forbids external resources (inline scripts are allowed: charts are drawn by them). Plain text
+/// (sources, standard output, plain-text values, failure messages) is always HTML-escaped; text/html outputs are
+/// formatter output and embedded as they are (MathML renders natively in current browsers). When an output holds a
+/// chart, the report carries exactly one copy of the chart library (<see cref="ChartLibrary"/>) in its head: copies that
+/// outputs brought along are removed.
 /// </remarks>
 public static class HtmlReportWriter
 {
@@ -65,12 +68,20 @@ public static class HtmlReportWriter
         ArgumentNullException.ThrowIfNull(dateLabel);
         var failures = results.Count(r => r.Failed);
         var codeCells = results.Count(r => r.Cell.Kind is CellKind.Code or CellKind.Unsupported);
+        var hasCharts = results.Any(r => r.Outputs.Any(o => o.IsHtml && ChartLibrary.ContainsChart(o.Content)));
         var html = new StringBuilder();
         html.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
-            .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'; img-src data:\">\n")
+            .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"")
+            .Append("default-src 'none'; script-src 'unsafe-inline'; style-src 'unsafe-inline'; img-src data:; font-src data:\">\n")
             .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
             .Append("<title>").Append(HtmlText.Escape(title)).Append("</title>\n")
-            .Append("<style>\n").Append(Stylesheet).Append("\n</style>\n</head>\n<body>\n<main>\n");
+            .Append("<style>\n").Append(Stylesheet).Append("\n</style>\n");
+        if (hasCharts)
+        {
+            html.Append(ChartLibrary.ScriptElement).Append('\n');
+        }
+
+        html.Append("</head>\n<body>\n<main>\n");
 
         html.Append("<header class=\"report\">\n<h1>").Append(HtmlText.Escape(title)).Append("</h1>\n")
             .Append("<p>").Append(HtmlText.Escape(dateLabel)).Append(' ')
@@ -129,7 +140,7 @@ public static class HtmlReportWriter
             html.Append("<div class=\"output ").Append(kind).Append("\">");
             if (output.IsHtml)
             {
-                html.Append(output.Content);
+                html.Append(ChartLibrary.RemoveCopies(output.Content));
             }
             else
             {

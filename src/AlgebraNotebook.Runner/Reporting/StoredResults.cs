@@ -1,3 +1,4 @@
+using AlgebraNotebook.Display.Diagrams;
 using AlgebraNotebook.Runner.Documents;
 using AlgebraNotebook.Runner.Execution;
 
@@ -9,8 +10,10 @@ namespace AlgebraNotebook.Runner.Reporting;
 /// </summary>
 /// <remarks>
 /// A stored notebook may come from someone else, so stored text/html is embedded in a report only when it has the
-/// shape of an AlgebraNotebook math fragment (<see cref="IsMathFragment"/>); any other output is shown as its escaped
-/// text/plain form (or, without one, as the escaped HTML source). Stored errors become the cell's failure text.
+/// shape of an AlgebraNotebook math fragment (<see cref="IsMathFragment"/>). A stored chart is drawn again from its
+/// figure data only (<see cref="ChartFragment.Rebuild"/>: the JSON is parsed and re-serialised, its scripts and other
+/// markup are discarded), and a stored Dynkin drawing from its Cartan type only (<see cref="DynkinDrawing.Rebuild"/>). Any other output is shown as its escaped text/plain form (or, without one, as the escaped HTML
+/// source). Stored errors become the cell's failure text.
 /// </remarks>
 public static class StoredResults
 {
@@ -58,9 +61,18 @@ public static class StoredResults
                     default:
                         var kind = output.OutputType == StoredOutput.ExecuteResult ? CellOutputKind.ReturnValue : CellOutputKind.DisplayedValue;
                         output.Data.TryGetValue(CellOutput.PlainText, out var plain);
-                        if (output.Data.TryGetValue(CellOutput.Html, out var html) && IsMathFragment(html))
+                        output.Data.TryGetValue(CellOutput.Html, out var html);
+                        if (html is not null && IsMathFragment(html))
                         {
                             outputs.Add(new CellOutput(kind, CellOutput.Html, html) { PlainContent = plain });
+                        }
+                        else if (html is not null && ChartFragment.Rebuild(html) is { } chart)
+                        {
+                            outputs.Add(new CellOutput(kind, CellOutput.Html, chart) { PlainContent = plain });
+                        }
+                        else if (html is not null && DynkinDrawing.Rebuild(html) is { } drawing)
+                        {
+                            outputs.Add(new CellOutput(kind, CellOutput.Html, drawing.ToHtml()) { PlainContent = plain });
                         }
                         else if ((plain ?? html) is { } text)
                         {

@@ -133,6 +133,28 @@ public class ExportTests
     }
 
     [Fact]
+    public async Task A_stored_chart_is_exported_from_its_figure_data_with_one_library_copy()
+    {
+        using var temp = new TempNotebook();
+        var path = WriteStoredNotebook(temp);
+        var root = JsonNode.Parse(File.ReadAllText(path))!;
+        var chart = AlgebraNotebook.Display.Diagrams.RootDiagram.Of("B2");
+        root["cells"]![1]!["outputs"]![1]!["data"] = new JsonObject
+        {
+            ["text/html"] = "<script>alert(1)</script>" + chart.ToHtml(includeLibrary: true),
+            ["text/plain"] = chart.ToString(),
+        };
+        temp.WriteJson("stored.ipynb", root);
+        var (code, _, _) = await Run("export", path, "--format", "html");
+        Assert.Equal(0, code);
+        var html = File.ReadAllText(Path.ChangeExtension(path, ".html"));
+        Assert.DoesNotContain("alert(1)", html);
+        Assert.Contains(chart.ToHtml(includeLibrary: false), html);
+        var library = AlgebraNotebook.Display.Diagrams.ChartLibrary.MarkerAttribute;
+        Assert.Equal(html.IndexOf(library, StringComparison.Ordinal), html.LastIndexOf(library, StringComparison.Ordinal));
+    }
+
+    [Fact]
     public async Task Latex_export_command_writes_a_tex_file_beside_the_notebook()
     {
         using var temp = new TempNotebook();
