@@ -265,7 +265,10 @@ public sealed partial class LieAlgebra<T>
         if (!ReferenceEquals(x.Algebra, this))
         {
             throw new ExactArgumentException(
-                $"The element {x} belongs to the algebra {x.Algebra.Label}, not to {Label}.", parameter);
+                x.Algebra.Label == Label
+                    ? $"The element {x} belongs to another algebra that is also labelled \"{Label}\" (two algebras built separately are different objects); take both elements from the same algebra."
+                    : $"The element {x} belongs to the algebra {x.Algebra.Label}, not to {Label}.",
+                parameter);
         }
     }
 

@@ -120,7 +120,9 @@ public readonly struct Coefficient<T> : IEquatable<Coefficient<T>>
         if (right.Ring is not null && !ReferenceEquals(left.Ring, right.Ring))
         {
             throw new ExactArgumentException(
-                $"Cannot combine {left} from ring \"{left.Ring.Name}\" with {right} from ring \"{right.Ring.Name}\"; move one of them with a CoordinateChange first.",
+                left.Ring.Name == right.Ring.Name
+                    ? $"Cannot combine {left} with {right}: they are from two separate rings that are both named \"{left.Ring.Name}\" (every CoordinateSystems call or Build makes a new ring); create both in the same ring object."
+                    : $"Cannot combine {left} from ring \"{left.Ring.Name}\" with {right} from ring \"{right.Ring.Name}\"; move one of them with a CoordinateChange first.",
                 nameof(right));
         }
 

@@ -106,6 +106,8 @@ public static class CoordinateSystems
         where T : IFieldElement<T>
     {
         ArgumentNullException.ThrowIfNull(cartesian);
+        RequireSymbols(cartesian, nameof(CartesianToSpherical), nameof(cartesian), "Cartesian", "x", "y", "z");
+        RequireSymbols(spherical, nameof(CartesianToSpherical), nameof(spherical), "Spherical", "r", "st", "ct", "cp", "sp");
         var images = new Dictionary<string, string> { ["x"] = "r*st*cp", ["y"] = "r*st*sp", ["z"] = "r*ct" };
         AddIfDeclared(cartesian, images, ("r", "r"), ("rinv", "rinv"), ("rho", "r*st"), ("rhoinv", "rinv*stinv"));
         return CoordinateChange<T>.FromCoordinateFormulas(cartesian, spherical, images);
@@ -130,6 +132,8 @@ public static class CoordinateSystems
         where T : IFieldElement<T>
     {
         ArgumentNullException.ThrowIfNull(plane);
+        RequireSymbols(plane, nameof(CartesianToPolar), nameof(plane), "CartesianPlane", "x", "y");
+        RequireSymbols(polar, nameof(CartesianToPolar), nameof(polar), "Polar", "r", "cp", "sp");
         var images = new Dictionary<string, string> { ["x"] = "r*cp", ["y"] = "r*sp" };
         AddIfDeclared(plane, images, ("r", "r"), ("rinv", "rinv"));
         return CoordinateChange<T>.FromCoordinateFormulas(plane, polar, images);
@@ -150,9 +154,25 @@ public static class CoordinateSystems
         where T : IFieldElement<T>
     {
         ArgumentNullException.ThrowIfNull(cartesian);
+        RequireSymbols(cartesian, nameof(CartesianToCylindrical), nameof(cartesian), "Cartesian", "x", "y", "z");
+        RequireSymbols(cylindrical, nameof(CartesianToCylindrical), nameof(cylindrical), "Cylindrical", "rho", "cp", "sp", "z");
         var images = new Dictionary<string, string> { ["x"] = "rho*cp", ["y"] = "rho*sp", ["z"] = "z" };
         AddIfDeclared(cartesian, images, ("rho", "rho"), ("rhoinv", "rhoinv"));
         return CoordinateChange<T>.FromCoordinateFormulas(cartesian, cylindrical, images);
+    }
+
+    /// <summary>Refuses a ring that lacks a symbol the change needs, naming the ring, the role and the builder to use.</summary>
+    private static void RequireSymbols<T>(CoefficientRing<T> ring, string change, string role, string builder, params string[] names)
+        where T : IFieldElement<T>
+    {
+        ArgumentNullException.ThrowIfNull(ring, role);
+        var missing = names.Where(n => !ring.Symbols.Any(s => s.Name == n)).ToArray();
+        if (missing.Length > 0)
+        {
+            throw new ExactArgumentException(
+                $"{change} needs as {role} a ring with the symbols {string.Join(", ", names)}, but ring \"{ring.Name}\" lacks {string.Join(", ", missing)}; build it with CoordinateSystems.{builder}.",
+                role);
+        }
     }
 
     private static void AddIfDeclared<T>(CoefficientRing<T> ring, Dictionary<string, string> images, params (string Name, string Image)[] optional)

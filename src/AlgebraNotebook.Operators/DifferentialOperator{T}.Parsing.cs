@@ -182,6 +182,12 @@ public sealed partial class DifferentialOperator<T>
                 if (name.StartsWith("d_", StringComparison.Ordinal))
                 {
                     var coordinate = name[2..];
+                    if (coordinate.Length == 0)
+                    {
+                        throw new ExactParseException(text, _pos,
+                            $"d_ must be followed by a coordinate of ring \"{ring.Name}\" (coordinates: {string.Join(", ", ring.Coordinates)})");
+                    }
+
                     if (!ring.Coordinates.Any(x => x.Name == coordinate))
                     {
                         throw new ExactParseException(text, start,

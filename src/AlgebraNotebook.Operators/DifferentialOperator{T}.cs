@@ -222,7 +222,9 @@ public sealed partial class DifferentialOperator<T> : IEquatable<DifferentialOpe
         if (!ReferenceEquals(Ring, other.Ring))
         {
             throw new ExactArgumentException(
-                $"Cannot combine {this} over ring \"{Ring.Name}\" with {other} over ring \"{other.Ring.Name}\": rewrite one of them with a CoordinateChange first.",
+                Ring.Name == other.Ring.Name
+                    ? $"Cannot combine {this} with {other}: they are over two separate rings that are both named \"{Ring.Name}\" (every CoordinateSystems call or Build makes a new ring); create both over the same ring object."
+                    : $"Cannot combine {this} over ring \"{Ring.Name}\" with {other} over ring \"{other.Ring.Name}\": rewrite one of them with a CoordinateChange first.",
                 parameter);
         }
     }

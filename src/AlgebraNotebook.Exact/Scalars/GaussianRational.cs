@@ -133,7 +133,14 @@ public readonly struct GaussianRational :
     {
         if (exponent < 0)
         {
-            return Reciprocal().Pow(-exponent);
+            if (IsZero)
+            {
+                throw new DivideByZeroException($"0 cannot be raised to the negative power {exponent}.");
+            }
+
+            // -int.MinValue overflows back to int.MinValue, which would recurse forever.
+            var reciprocal = Reciprocal();
+            return exponent == int.MinValue ? reciprocal.Pow(int.MaxValue) * reciprocal : reciprocal.Pow(-exponent);
         }
 
         return Powers.BySquaring(One, this, exponent);

@@ -109,15 +109,31 @@ public readonly partial struct Rational
     /// <summary>Absolute value.</summary>
     public Rational Abs() => _numerator.Sign < 0 ? -this : this;
 
-    /// <summary>Integer power; negative exponents invert (and throw for zero).</summary>
+    /// <summary>Integer power; negative exponents invert (and throw <see cref="DivideByZeroException"/> for zero).</summary>
+    /// <exception cref="BeyondCapabilityException">The result has more bits than a .NET integer can hold.</exception>
     public Rational Pow(int exponent)
     {
         if (exponent < 0)
         {
-            return Reciprocal().Pow(-exponent);
+            if (IsZero)
+            {
+                throw new DivideByZeroException($"0 cannot be raised to the negative power {exponent}.");
+            }
+
+            // -int.MinValue overflows back to int.MinValue, which would recurse forever.
+            var reciprocal = Reciprocal();
+            return exponent == int.MinValue ? reciprocal.Pow(int.MaxValue) * reciprocal : reciprocal.Pow(-exponent);
         }
 
-        return FromCanonical(BigInteger.Pow(_numerator, exponent), BigInteger.Pow(Denominator, exponent));
+        try
+        {
+            return FromCanonical(BigInteger.Pow(_numerator, exponent), BigInteger.Pow(Denominator, exponent));
+        }
+        catch (OverflowException e)
+        {
+            throw new BeyondCapabilityException(
+                $"({this})^{exponent} is too large to hold exactly: it needs at least {((long)exponent * (Math.Max(_numerator.GetBitLength(), Denominator.GetBitLength()) - 1)) + 1} bits, beyond the largest integer .NET can store ({e.Message}).");
+        }
     }
 
     /// <summary>The greatest integer not above this value.</summary>

@@ -34,6 +34,11 @@ public readonly struct LyndonWord : IEquatable<LyndonWord>, IComparable<LyndonWo
     /// <exception cref="ExactArgumentException">The word is empty or not a Lyndon word.</exception>
     public static LyndonWord Create(Word word)
     {
+        if (word.Length == 0)
+        {
+            throw new ExactArgumentException("The empty word is not a Lyndon word; a Lyndon word has at least one letter.", nameof(word));
+        }
+
         if (!IsLyndon(word))
         {
             throw new ExactArgumentException($"The word {word} is not a Lyndon word (it must be non-empty and smaller than each of its proper suffixes).", nameof(word));

@@ -54,7 +54,8 @@ public static class NotebookFile
     /// <param name="path">Name used in error messages.</param>
     /// <param name="json">The notebook JSON.</param>
     /// <returns>The cells in document order, numbered from 1.</returns>
-    /// <exception cref="NotebookLoadException">The text is not valid JSON or not an nbformat notebook.</exception>
+    /// <exception cref="NotebookLoadException">The text is not valid JSON or not an nbformat 4 notebook (an "nbformat"
+    /// other than 4, a cell that is not an object or has no "cell_type" string).</exception>
     public static IReadOnlyList<NotebookCell> ParseIpynb(string path, string json)
     {
         ArgumentNullException.ThrowIfNull(path);
@@ -72,13 +73,23 @@ public static class NotebookFile
                     $"Notebook '{path}' is not an nbformat notebook: the top level must be an object with a \"cells\" array.");
             }
 
+            CheckFormatVersion(path, document.RootElement.TryGetProperty("nbformat", out var format) ? format.GetRawText() : null,
+                format.ValueKind == JsonValueKind.Number && format.TryGetInt32(out var version) ? version : null);
             foreach (var cell in cells.EnumerateArray())
             {
-                cellTypes.Add(cell.ValueKind == JsonValueKind.Object
-                              && cell.TryGetProperty("cell_type", out var type)
-                              && type.ValueKind == JsonValueKind.String
-                    ? type.GetString()
-                    : null);
+                var number = cellTypes.Count + 1;
+                if (cell.ValueKind != JsonValueKind.Object)
+                {
+                    throw new NotebookLoadException(path, $"Notebook '{path}': cell {number} is not a JSON object but {cell.GetRawText()}.");
+                }
+
+                if (!cell.TryGetProperty("cell_type", out var type) || type.ValueKind != JsonValueKind.String)
+                {
+                    throw new NotebookLoadException(path,
+                        $"Notebook '{path}': cell {number} has no \"cell_type\" string (nbformat 4 requires \"code\", \"markdown\" or \"raw\").");
+                }
+
+                cellTypes.Add(type.GetString());
             }
         }
         catch (JsonException e)
@@ -100,6 +111,22 @@ public static class NotebookFile
         }
 
         return ToCells(parsed, cellTypes.Count == parsed.Elements.Count ? cellTypes : null);
+    }
+
+    /// <summary>
+    /// Refuses an "nbformat" entry other than the integer 4 (this reader implements nbformat 4 only); a file without
+    /// the entry is read as nbformat 4.
+    /// </summary>
+    /// <param name="path">Name used in the message.</param>
+    /// <param name="rawValue">The JSON text of the "nbformat" value, or null when there is none.</param>
+    /// <param name="version">The value as an integer, or null when it is not one.</param>
+    internal static void CheckFormatVersion(string path, string? rawValue, int? version)
+    {
+        if (rawValue is not null && version != 4)
+        {
+            throw new NotebookLoadException(path,
+                $"Notebook '{path}' has \"nbformat\": {rawValue}; only nbformat 4 notebooks can be read (convert it with a current Jupyter first).");
+        }
     }
 
     /// <summary>Parses .dib text (cells separated by lines such as <c>#!csharp</c> and <c>#!markdown</c>).</summary>

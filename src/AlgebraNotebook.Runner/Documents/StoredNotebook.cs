@@ -72,7 +72,8 @@ public sealed class StoredNotebook
     /// <param name="path">Name used in error messages.</param>
     /// <param name="json">The notebook JSON.</param>
     /// <returns>The stored cells and outputs.</returns>
-    /// <exception cref="NotebookLoadException">The text is not JSON, or not an object with a "cells" array of objects.</exception>
+    /// <exception cref="NotebookLoadException">The text is not JSON, not an object with a "cells" array of objects, has an
+    /// "nbformat" other than 4, or a cell whose "outputs" is not an array.</exception>
     public static StoredNotebook Parse(string path, string json)
     {
         ArgumentNullException.ThrowIfNull(path);
@@ -95,6 +96,9 @@ public sealed class StoredNotebook
                 $"Notebook '{path}' is not an nbformat notebook: the top level must be an object with a \"cells\" array.");
         }
 
+        var format = rootObject["nbformat"];
+        NotebookFile.CheckFormatVersion(path, format?.ToJsonString(),
+            format is JsonValue formatValue && formatValue.TryGetValue<int>(out var version) ? version : null);
         var cells = new List<StoredCell>();
         foreach (var node in cellArray)
         {
@@ -106,6 +110,12 @@ public sealed class StoredNotebook
 
             var cellType = StringOf(cell["cell_type"]) ?? "code";
             var outputs = new List<StoredOutput>();
+            if (cell["outputs"] is { } outputsNode and not JsonArray)
+            {
+                throw new NotebookLoadException(path,
+                    $"Notebook '{path}': the \"outputs\" of cell {number} must be a JSON array, not {outputsNode.ToJsonString()}.");
+            }
+
             if (cell["outputs"] is JsonArray outputArray)
             {
                 foreach (var output in outputArray)
