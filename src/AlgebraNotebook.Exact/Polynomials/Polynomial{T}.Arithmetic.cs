@@ -1,3 +1,4 @@
+using System.Numerics;
 using AlgebraNotebook.Exact.Scalars;
 
 namespace AlgebraNotebook.Exact.Polynomials;
@@ -112,10 +113,26 @@ public sealed partial class Polynomial<T>
         return changed ? new Polynomial<T>(_monomials, conjugated) : this;
     }
 
-    /// <summary>The polynomial to a non-negative integer power (by repeated squaring; p^0 = 1, including 0^0).</summary>
+    /// <summary>
+    /// The polynomial to a non-negative integer power (by repeated squaring; p^0 = 1, including 0^0), refused before any
+    /// work when the result is estimated to exceed <see cref="PowerLimits.Default"/>.
+    /// </summary>
     /// <exception cref="ExactArgumentException">The exponent is negative.</exception>
-    public Polynomial<T> Pow(int exponent)
+    /// <exception cref="BeyondCapabilityException">The estimated result exceeds the default limits.</exception>
+    public Polynomial<T> Pow(int exponent) => Pow(exponent, PowerLimits.Default);
+
+    /// <summary>
+    /// The polynomial to a non-negative integer power, refused before any work when the result's estimated size exceeds
+    /// <paramref name="limits"/>: the number of terms is at most the number of multisets of size <paramref name="exponent"/>
+    /// drawn from the polynomial's terms, and at most the number of monomials of the result's total degree or less.
+    /// A single term is always raised directly (its cost is one scalar power).
+    /// </summary>
+    /// <exception cref="ExactArgumentException">The exponent is negative, or <paramref name="limits"/> is invalid.</exception>
+    /// <exception cref="BeyondCapabilityException">The estimated result exceeds <paramref name="limits"/>; the message gives the estimate.</exception>
+    public Polynomial<T> Pow(int exponent, PowerLimits limits)
     {
+        ArgumentNullException.ThrowIfNull(limits);
+        limits.Validate();
         if (exponent < 0)
         {
             throw new ExactArgumentException(
@@ -127,7 +144,51 @@ public sealed partial class Polynomial<T>
             return new Polynomial<T>([_monomials[0].Pow(exponent)], [PowScalar(_coefficients[0], exponent)]);
         }
 
+        if (_monomials.Length > 1)
+        {
+            CheckPowerEstimate(exponent, limits);
+        }
+
         return Powers.BySquaring(OneInstance, this, exponent);
+    }
+
+    private void CheckPowerEstimate(int exponent, PowerLimits limits)
+    {
+        var degree = (long)TotalDegree * exponent;
+        // Terms of p^e: multisets of e terms of p, C(k - 1 + e, e), and monomials in n variables of degree <= d e, C(n + d e, n).
+        var byTerms = Binomial(_monomials.Length - 1 + (long)exponent, _monomials.Length - 1);
+        var byMonomials = Binomial(Symbols.Count + degree, Symbols.Count);
+        var terms = BigInteger.Min(byTerms, byMonomials);
+        if (degree > limits.MaxTotalDegree || terms > limits.MaxTerms)
+        {
+            var shown = ToString();
+            if (shown.Length > 60)
+            {
+                shown = shown[..57] + "...";
+            }
+
+            throw new BeyondCapabilityException(
+                $"({shown})^{exponent} would have total degree {degree} and up to {(terms > BigInteger.Pow(10, 15) ? "about 10^" + (int)BigInteger.Log10(terms) : terms.ToString("N0", System.Globalization.CultureInfo.InvariantCulture))} terms, " +
+                $"beyond the limits ({limits}). Pass a larger PowerLimits to Pow(exponent, limits) to go on.");
+        }
+    }
+
+    private static BigInteger Binomial(long n, long k)
+    {
+        // Stops early once the value is far beyond any limit, so huge exponents cost nothing.
+        k = Math.Min(k, n - k);
+        var result = BigInteger.One;
+        var cap = BigInteger.Pow(10, 40);
+        for (long j = 1; j <= k; j++)
+        {
+            result = result * (n - k + j) / j;
+            if (result > cap)
+            {
+                return result;
+            }
+        }
+
+        return result;
     }
 
     private static T PowScalar(T value, int exponent)
