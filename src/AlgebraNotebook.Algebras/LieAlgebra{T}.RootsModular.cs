@@ -104,10 +104,38 @@ public sealed partial class LieAlgebra<T>
         var random = new Random(977);
         ulong[] RandomVector() => Enumerable.Range(0, n).Select(_ => (ulong)random.NextInt64(1, (long)PrimeField.P)).ToArray();
 
-        // (1) Toral candidates and a maximal commuting set, in basis order.
+        // (1) Toral candidates and a maximal commuting set, in basis order. A toral element with rational eigenvalues has
+        // K(x, x) = sum of squares of its eigenvalues, zero only when ad x = 0; so ad-nilpotent basis elements (K(x, x) = 0,
+        // ad x != 0) are skipped before the Krylov test.
         var commuting = new List<int>();
         for (var j = 0; j < n; j++)
         {
+            var central = true;
+            var killing = 0UL;
+            for (var b = 0; b < n; b++)
+            {
+                var list = sparse[j * n + b];
+                var values = residues[j * n + b];
+                for (var t = 0; t < list.Length; t++)
+                {
+                    central = false;
+                    var k = list[t].K;
+                    var back = sparse[j * n + k];
+                    for (var s = 0; s < back.Length; s++)
+                    {
+                        if (back[s].K == b)
+                        {
+                            killing = PrimeField.Add(killing, PrimeField.Mul(values[t], residues[j * n + k][s]));
+                        }
+                    }
+                }
+            }
+
+            if (killing == 0 && !central)
+            {
+                continue;
+            }
+
             var unit = new ulong[n];
             unit[j] = 1;
             var (minimal, _) = KrylovMinimalPolynomial(v => Apply(unit, v), RandomVector(), n);
@@ -155,7 +183,7 @@ public sealed partial class LieAlgebra<T>
             }
 
             eigenvectors = [];
-            foreach (var lambda in PrimeFieldPolynomials.Roots(f, random))
+            foreach (var lambda in EigenvalueResidues(f, random))
             {
                 // u = q(ad x) start with q = f / (t - λ): the component of start in the λ-eigenspace, up to a factor.
                 var q = new ulong[m];
@@ -303,6 +331,35 @@ public sealed partial class LieAlgebra<T>
 
         reason = "no random element of the Cartan subalgebra separated the roots";
         return null;
+    }
+
+    /// <summary>
+    /// The roots of f (split, distinct roots). For a semisimple algebra the eigenvalues of ad x on its image come in pairs
+    /// ±α(x), so f(t) = g(t^2): then the roots of g are found and their square roots taken (p = 3 mod 4, so a square root
+    /// of a square s is s^((p+1)/4)), which halves the degree of the splitting.
+    /// </summary>
+    private static List<ulong> EigenvalueResidues(ulong[] f, Random random)
+    {
+        if (f.Length % 2 == 0 || Enumerable.Range(0, f.Length).Any(k => k % 2 == 1 && f[k] != 0))
+        {
+            return PrimeFieldPolynomials.Roots(f, random);
+        }
+
+        var g = Enumerable.Range(0, f.Length).Where(k => k % 2 == 0).Select(k => f[k]).ToArray();
+        var roots = new List<ulong>();
+        foreach (var s in PrimeFieldPolynomials.Roots(g, random))
+        {
+            var root = PrimeField.Pow(s, (PrimeField.P + 1) / 4);
+            if (PrimeField.Mul(root, root) != s)
+            {
+                return PrimeFieldPolynomials.Roots(f, random);
+            }
+
+            roots.Add(root);
+            roots.Add(PrimeField.Neg(root));
+        }
+
+        return roots;
     }
 
     /// <summary>The minimal polynomial (monic, residues) of start under the map, and the Krylov vectors start, A start, ...</summary>

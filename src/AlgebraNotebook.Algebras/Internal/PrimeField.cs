@@ -26,8 +26,9 @@ internal static class PrimeField
 
     public static ulong Mul(ulong a, ulong b)
     {
-        var product = (UInt128)a * b;
-        var s = ((ulong)product & P) + (ulong)(product >> 61);
+        // a b < 2^122 = hi 2^64 + lo; 2^61 = 1 (mod p), so a b = (low 61 bits) + (the rest shifted down by 61).
+        var hi = Math.BigMul(a, b, out var lo);
+        var s = (lo & P) + ((lo >> 61) | (hi << 3));
         return s >= P ? s - P : s;
     }
 
@@ -60,6 +61,13 @@ internal static class PrimeField
 
     public static ulong FromBig(BigInteger value)
     {
+        if (value >= long.MinValue && value <= long.MaxValue)
+        {
+            var small = (long)value;
+            var residue = (ulong)Math.Abs(small % (long)P);
+            return small < 0 ? Neg(residue) : residue;
+        }
+
         var r = (ulong)BigInteger.Remainder(BigInteger.Abs(value), P);
         return value.Sign < 0 ? Neg(r) : r;
     }
@@ -67,6 +75,11 @@ internal static class PrimeField
     /// <summary>The residue of a rational, or null when p divides its denominator.</summary>
     public static ulong? FromRational(Rational q)
     {
+        if (q.IsInteger)
+        {
+            return FromBig(q.Numerator);
+        }
+
         var d = FromBig(q.Denominator);
         return d == 0 ? null : Mul(FromBig(q.Numerator), Inverse(d));
     }

@@ -15,8 +15,14 @@ public class ProbeTimingTests(ITestOutputHelper output)
     public void Probe(string type)
     {
         var sw = Stopwatch.StartNew();
-        var algebra = RandomBasisChange.Disguised(type, 7);
-        output.WriteLine($"{type} build+disguise {sw.Elapsed}");
+        var chevalley = ChevalleyBasis.Of(type);
+        output.WriteLine($"{type} chevalley {sw.Elapsed}");
+        sw.Restart();
+        var plain = chevalley.ToLieAlgebra(maximumDimension: 248);
+        output.WriteLine($"{type} dense {sw.Elapsed}");
+        sw.Restart();
+        var algebra = RandomBasisChange.Disguise(plain, chevalley.System.Rank, 7);
+        output.WriteLine($"{type} disguise {sw.Elapsed}");
         sw.Restart();
         var d = algebra.TryRootDecompositionModular(out var reason);
         output.WriteLine($"{type} modular {sw.Elapsed} {d?.Type} {reason}");
