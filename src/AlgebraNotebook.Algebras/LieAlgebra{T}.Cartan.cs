@@ -166,7 +166,7 @@ public sealed partial class LieAlgebra<T>
             }
         }
 
-        var (type, order) = CartanIdentification.Identify(cartan);
+        var (type, order) = IdentifyInBourbakiOrder(cartan);
         var simpleOrdered = order.Select(i => simple[i]).ToArray();
         var cartanMatrix = Matrix<Rational>.FromFunction(r, r, (i, j) => cartan[order[i], order[j]]);
         var reference = Roots.RootSystem.Of(type).CartanMatrix;
@@ -187,6 +187,46 @@ public sealed partial class LieAlgebra<T>
             .ToArray();
         var simpleSpaces = simpleOrdered.Select(i => spaces[i]).ToArray();
         return new RootDecomposition<T>(hElements, true, $"split over {FieldOperations<T>.FieldName}: type {type}, {roots.Count} roots", ordered, simpleSpaces, cartanMatrix, type);
+    }
+
+    /// <summary>
+    /// The type of a Cartan matrix and, per Bourbaki node, its row, from the roots layer's <see cref="Roots.CartanType.Identify"/>.
+    /// Where a diagram automorphism leaves a choice, this algebra layer keeps its own fixed choice so results do not
+    /// change: a rank-2 component with a double bond is named B2 (long root first), never C2; in D4 the outer nodes
+    /// alpha_1, alpha_3, alpha_4 are the largest, smallest and middle row; in E6 the arm alpha_3 - alpha_1 is the one whose
+    /// node next to alpha_4 has the smaller row.
+    /// </summary>
+    internal static (Roots.CartanType Type, int[] Order) IdentifyInBourbakiOrder(Rational[,] cartan)
+    {
+        var r = cartan.GetLength(0);
+        var found = Roots.CartanType.Identify(Matrix<Rational>.FromFunction(r, r, (i, j) => cartan[i, j]));
+        var rows = found.RowOfNode.ToArray();
+        var components = new List<Roots.SimpleCartanType>();
+        var start = 0;
+        foreach (var component in found.Type.Components)
+        {
+            var part = rows.AsSpan(start, component.Rank);
+            var type = component;
+            switch (component.Family, component.Rank)
+            {
+                case (Roots.CartanFamily.C, 2):
+                    type = Roots.SimpleCartanType.Of(Roots.CartanFamily.B, 2);
+                    (part[0], part[1]) = (part[1], part[0]);
+                    break;
+                case (Roots.CartanFamily.D, 4):
+                    var leaves = new[] { part[0], part[2], part[3] }.Order().ToArray();
+                    (part[0], part[2], part[3]) = (leaves[2], leaves[0], leaves[1]);
+                    break;
+                case (Roots.CartanFamily.E, 6) when part[4] < part[2]:
+                    (part[0], part[2], part[4], part[5]) = (part[5], part[4], part[2], part[0]);
+                    break;
+            }
+
+            components.Add(type);
+            start += component.Rank;
+        }
+
+        return (Roots.CartanType.Of(components.ToArray()), rows);
     }
 
     private T[][] CartanCore() => _cartan.Value;
