@@ -31,7 +31,17 @@ public sealed partial class LieAlgebra<T>
     private int RandomCoefficientBound => Dimension <= 20 ? 20 : 1_000_000;
 
     /// <summary>
-    /// The root decomposition of a semisimple algebra with respect to <see cref="CartanSubalgebra"/>. A random element h
+    /// The root decomposition of a semisimple algebra with respect to a split Cartan subalgebra, with the Cartan matrix
+    /// and the type. Dispatcher: <see cref="RootDecompositionModular"/> (fast, every result proved exactly) when it
+    /// applies, otherwise <see cref="RootDecompositionReference"/>; both give the same output when both apply. The
+    /// conventions (order of roots, normalisation of root vectors, Bourbaki numbering) are those documented at
+    /// <see cref="RootDecompositionReference"/>.
+    /// </summary>
+    /// <exception cref="ExactArgumentException">The algebra is not semisimple.</exception>
+    public RootDecomposition<T> RootDecomposition() => TryRootDecompositionModular(out _) ?? RootDecompositionReference();
+
+    /// <summary>
+    /// The root decomposition by the reference variant (the test oracle), with respect to <see cref="CartanSubalgebra"/>. A random element h
     /// of the Cartan subalgebra (fixed seed) is diagonalised; its non-zero eigenvalues must be simple and lie in the field,
     /// otherwise the result is marked not split with a note (for a real algebra: complexify with
     /// <see cref="RealLieAlgebras.Complexify"/>). Roots are ordered by the lexicographic order of their coordinates in a
@@ -39,7 +49,7 @@ public sealed partial class LieAlgebra<T>
     /// Cartan matrix, renumbered in Bourbaki's order and checked against the roots layer's Cartan matrix of the identified type.
     /// </summary>
     /// <exception cref="ExactArgumentException">The algebra is not semisimple.</exception>
-    public RootDecomposition<T> RootDecomposition()
+    public RootDecomposition<T> RootDecompositionReference()
     {
         if (!IsSemisimple)
         {
@@ -97,19 +107,20 @@ public sealed partial class LieAlgebra<T>
                 continue;
             }
 
-            return BuildRootData(hElements, h, roots);
+            // (α, β) = α^T κ^{-1} β with κ the Killing form restricted to h.
+            var killing = KillingForm();
+            var kappa = Matrix<T>.FromFunction(r, r, (i, j) => Bilinear(killing, h[i], h[j]));
+            return BuildRootData(hElements, h, roots, kappa);
         }
 
         throw new BeyondCapabilityException($"Root decomposition of {Label}: {note} after {RandomAttempts} random elements of the Cartan subalgebra.");
     }
 
-    private RootDecomposition<T> BuildRootData(IReadOnlyList<LieElement<T>> hElements, T[][] h, List<(T[] Values, T[] Vector)> roots)
+    private RootDecomposition<T> BuildRootData(IReadOnlyList<LieElement<T>> hElements, T[][] h, List<(T[] Values, T[] Vector)> roots, Matrix<T> kappa)
     {
         var r = h.Length;
 
         // (α, β) = α^T κ^{-1} β with κ the Killing form restricted to h.
-        var killing = KillingForm();
-        var kappa = Matrix<T>.FromFunction(r, r, (i, j) => Bilinear(killing, h[i], h[j]));
         var kappaInverse = LinearAlgebra.Inverse(kappa);
         T Inner(T[] a, T[] b) => Bilinear(kappaInverse, a, b);
 
@@ -128,9 +139,18 @@ public sealed partial class LieAlgebra<T>
             .Select(c => RationalPart<T>.TryToRational(c) ?? throw new InvalidOperationException("A root has non-rational coordinates in a basis of roots.")).ToArray()).ToList();
         bool Positive(Rational[] c) => c.First(x => !x.IsZero).Sign > 0;
         var positive = Enumerable.Range(0, roots.Count).Where(i => Positive(coordinates[i])).ToList();
-        var positiveSet = positive.Select(i => coordinates[i]).ToList();
-        var simple = positive.Where(i => !positiveSet.Any(a => positiveSet.Any(b =>
-            Enumerable.Range(0, r).All(k => a[k] + b[k] == coordinates[i][k])))).ToList();
+        // Simple: positive and not the sum of two positive roots (sums collected once, so the cost is quadratic).
+        static string Key(IEnumerable<Rational> c) => string.Join(",", c);
+        var sums = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var a in positive)
+        {
+            foreach (var b in positive)
+            {
+                sums.Add(Key(Enumerable.Range(0, r).Select(k => coordinates[a][k] + coordinates[b][k])));
+            }
+        }
+
+        var simple = positive.Where(i => !sums.Contains(Key(coordinates[i]))).ToList();
         if (simple.Count != r)
         {
             throw new InvalidOperationException($"Root decomposition of {Label}: found {simple.Count} simple roots for rank {r}.");
@@ -146,7 +166,7 @@ public sealed partial class LieAlgebra<T>
             }
         }
 
-        var (type, order) = CartanIdentification.Identify(cartan);
+        var (type, order) = IdentifyInBourbakiOrder(cartan);
         var simpleOrdered = order.Select(i => simple[i]).ToArray();
         var cartanMatrix = Matrix<Rational>.FromFunction(r, r, (i, j) => cartan[order[i], order[j]]);
         var reference = Roots.RootSystem.Of(type).CartanMatrix;
@@ -167,6 +187,46 @@ public sealed partial class LieAlgebra<T>
             .ToArray();
         var simpleSpaces = simpleOrdered.Select(i => spaces[i]).ToArray();
         return new RootDecomposition<T>(hElements, true, $"split over {FieldOperations<T>.FieldName}: type {type}, {roots.Count} roots", ordered, simpleSpaces, cartanMatrix, type);
+    }
+
+    /// <summary>
+    /// The type of a Cartan matrix and, per Bourbaki node, its row, from the roots layer's <see cref="Roots.CartanType.Identify"/>.
+    /// Where a diagram automorphism leaves a choice, this algebra layer keeps its own fixed choice so results do not
+    /// change: a rank-2 component with a double bond is named B2 (long root first), never C2; in D4 the outer nodes
+    /// alpha_1, alpha_3, alpha_4 are the largest, smallest and middle row; in E6 the arm alpha_3 - alpha_1 is the one whose
+    /// node next to alpha_4 has the smaller row.
+    /// </summary>
+    internal static (Roots.CartanType Type, int[] Order) IdentifyInBourbakiOrder(Rational[,] cartan)
+    {
+        var r = cartan.GetLength(0);
+        var found = Roots.CartanType.Identify(Matrix<Rational>.FromFunction(r, r, (i, j) => cartan[i, j]));
+        var rows = found.RowOfNode.ToArray();
+        var components = new List<Roots.SimpleCartanType>();
+        var start = 0;
+        foreach (var component in found.Type.Components)
+        {
+            var part = rows.AsSpan(start, component.Rank);
+            var type = component;
+            switch (component.Family, component.Rank)
+            {
+                case (Roots.CartanFamily.C, 2):
+                    type = Roots.SimpleCartanType.Of(Roots.CartanFamily.B, 2);
+                    (part[0], part[1]) = (part[1], part[0]);
+                    break;
+                case (Roots.CartanFamily.D, 4):
+                    var leaves = new[] { part[0], part[2], part[3] }.Order().ToArray();
+                    (part[0], part[2], part[3]) = (leaves[2], leaves[0], leaves[1]);
+                    break;
+                case (Roots.CartanFamily.E, 6) when part[4] < part[2]:
+                    (part[0], part[2], part[4], part[5]) = (part[5], part[4], part[2], part[0]);
+                    break;
+            }
+
+            components.Add(type);
+            start += component.Rank;
+        }
+
+        return (Roots.CartanType.Of(components.ToArray()), rows);
     }
 
     private T[][] CartanCore() => _cartan.Value;

@@ -1,3 +1,4 @@
+using AlgebraNotebook.Algebras.Internal;
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
@@ -22,7 +23,8 @@ public sealed partial class LieAlgebra<T>
 
     /// <summary>
     /// The Killing form K(x, y) = tr(ad x ad y) as the symmetric Gram matrix K_ij = K(e_i, e_j) in this algebra's basis.
-    /// Cost O(n^4). Computed once and kept.
+    /// Summed over the non-zero structure constants only (a product of two constants per term), so sparse tables such
+    /// as Chevalley bases are fast; at most O(n^4) for a dense table. Computed once and kept.
     /// </summary>
     public Matrix<T> KillingForm() => _killing.Value;
 
@@ -155,7 +157,53 @@ public sealed partial class LieAlgebra<T>
         return result;
     }
 
+    // K_ij = tr(ad e_i ad e_j) = sum over b, k of c_ib^k c_jk^b, summed over the non-zero constants only: for each
+    // non-zero c_ib^k, the non-zero c_jk^b are listed by (k, b). Same exact sums as the reference, far fewer terms.
     private Matrix<T> ComputeKillingForm()
+    {
+        var n = Dimension;
+        var sparse = SparseConstants();
+        var byTarget = new List<(int J, T C)>?[n * n];
+        for (var j = 0; j < n; j++)
+        {
+            for (var k = 0; k < n; k++)
+            {
+                foreach (var (b, c) in sparse[j * n + k])
+                {
+                    (byTarget[k * n + b] ??= []).Add((j, c));
+                }
+            }
+        }
+
+        var form = new T[n, n];
+        for (var i = 0; i < n; i++)
+        {
+            var row = Vectors<T>.Zero(n);
+            for (var b = 0; b < n; b++)
+            {
+                foreach (var (k, c) in sparse[i * n + b])
+                {
+                    if (byTarget[k * n + b] is { } list)
+                    {
+                        foreach (var (j, d) in list)
+                        {
+                            row[j] += c * d;
+                        }
+                    }
+                }
+            }
+
+            for (var j = 0; j < n; j++)
+            {
+                form[i, j] = row[j];
+            }
+        }
+
+        return Matrix<T>.FromFunction(n, n, (i, j) => form[i, j]);
+    }
+
+    /// <summary>The reference computation of the Killing form (test oracle): tr(ad e_i ad e_j) from dense matrix products, O(n^5).</summary>
+    internal Matrix<T> KillingFormByMatrixProducts()
     {
         var ad = _adjoint.Value;
         var n = Dimension;

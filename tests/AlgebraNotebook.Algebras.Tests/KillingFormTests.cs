@@ -113,4 +113,23 @@ public class KillingFormTests
         Assert.Equal(sl.Dimension, result.Count);
         return result.ToArray();
     }
+
+    // The sparse sum must equal the definition K_ij = tr(ad e_i ad e_j) computed from dense matrix products
+    // (Humphreys 5.1, from memory), on algebras with dense and sparse tables.
+    [Fact]
+    public void Sparse_Killing_form_equals_the_trace_of_matrix_products()
+    {
+        var algebras = new[]
+        {
+            LieAlgebras.SpecialLinear<Rational>(3),
+            LieAlgebras.Orthogonal<Rational>(4, 3),
+            LieAlgebras.Galilei<Rational>(),
+            Chevalley.RandomBasisChange.Disguised("G2", 2),
+            Samples.So3(),
+        };
+        foreach (var g in algebras)
+        {
+            Assert.Equal(g.KillingFormByMatrixProducts(), g.KillingForm());
+        }
+    }
 }

@@ -44,7 +44,7 @@ public class ChevalleyRoundTripTests
     // Killing form on the Cartan subalgebra: K(h_i, h_j) = 2 h^vee (alpha_i^vee, alpha_j^vee) with long roots of squared
     // length 2 (the Killing form is 2 h^vee times the normalised invariant form; Kac, Infinite-dimensional Lie algebras,
     // Exercise 6.2, from memory), and K(e_alpha, f_alpha) = 2 h^vee * 2/(alpha, alpha). Dual Coxeter numbers: E6 12,
-    // F4 9, G2 4 (Bourbaki plates, comarks). This also covers E6, whose root decomposition the algebra layer cannot yet find.
+    // F4 9, G2 4 (Bourbaki plates, comarks).
     [Theory]
     [InlineData("G2", 4)]
     [InlineData("F4", 9)]
