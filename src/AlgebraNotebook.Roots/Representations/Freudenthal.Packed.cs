@@ -22,20 +22,30 @@ internal static partial class Freudenthal
             return DominantCharacterReference(geometry, highest, dominants, cancellationToken, progress);
         }
 
-        try
+        // The Freudenthal numerators are bounded by about dim(V) * |lambda + rho|^2 * (number of positive roots) * (string
+        // length); start with the narrowest width whose range comfortably holds that, and widen on a detected overflow.
+        var bits = geometry.WeylDimension(highest).GetBitLength() + 2 * BitLength(dominants.Count + geometry.PositiveRootLabels.Length)
+            + BitLength(geometry.ScaledInnerProduct(highest, highest) + 4 * geometry.GramScale * geometry.Rank * geometry.Rank);
+        if (bits < 62)
         {
-            return DominantCharacterPacked<long>(geometry, dominants, packing, cancellationToken, progress);
-        }
-        catch (OverflowException)
-        {
+            try
+            {
+                return DominantCharacterPacked<long>(geometry, dominants, packing, cancellationToken, progress);
+            }
+            catch (OverflowException)
+            {
+            }
         }
 
-        try
+        if (bits < 126)
         {
-            return DominantCharacterPacked<Int128>(geometry, dominants, packing, cancellationToken, progress);
-        }
-        catch (OverflowException)
-        {
+            try
+            {
+                return DominantCharacterPacked<Int128>(geometry, dominants, packing, cancellationToken, progress);
+            }
+            catch (OverflowException)
+            {
+            }
         }
 
         return DominantCharacterPacked<BigInteger>(geometry, dominants, packing, cancellationToken, progress);
@@ -82,13 +92,11 @@ internal static partial class Freudenthal
 
             return row;
         }).ToArray();
-        var simple = new int[rank * rank];
+        var simple = new (int Node, int Value)[rank][];
         for (var i = 0; i < rank; i++)
         {
-            for (var k = 0; k < rank; k++)
-            {
-                simple[i * rank + k] = geometry.SimpleRootLabels[i][k];
-            }
+            simple[i] = Enumerable.Range(0, rank).Where(k => geometry.SimpleRootLabels[i][k] != 0)
+                .Select(k => (k, geometry.SimpleRootLabels[i][k])).ToArray();
         }
 
         var highest = dominants[0];
@@ -227,13 +235,17 @@ internal static partial class Freudenthal
     }
 
     /// <summary>Levels with at least this many dominant weights are computed in parallel.</summary>
-    internal const int ParallelLevelThreshold = 48;
+    internal const int ParallelLevelThreshold = 4;
 
-    private static void ToDominant(Span<int> labels, int[] simple, int rank)
+    private static long BitLength(long value) => 64 - BitOperations.LeadingZeroCount((ulong)Math.Max(value, 1));
+
+    /// <summary>Reflects at the first negative label until none is left; <paramref name="sparse"/> lists, per simple root,
+    /// the nodes where its labels (a Cartan column) are non-zero and the values, so a reflection touches only those.</summary>
+    private static void ToDominant(Span<int> labels, (int Node, int Value)[][] sparse, int rank)
     {
+        var i = 0;
         while (true)
         {
-            var i = 0;
             while (i < rank && labels[i] >= 0)
             {
                 i++;
@@ -245,11 +257,19 @@ internal static partial class Freudenthal
             }
 
             var m = labels[i];
-            var offset = i * rank;
-            for (var k = 0; k < rank; k++)
+            var first = rank;
+            foreach (var (node, value) in sparse[i])
             {
-                labels[k] -= m * simple[offset + k];
+                labels[node] -= m * value;
+                if (labels[node] < 0 && node < first)
+                {
+                    first = node;
+                }
             }
+
+            // Only the touched nodes can have turned negative; the scan resumes at the first of them (or at 0 when
+            // none did, since earlier labels were non-negative and untouched ones stay so).
+            i = first < rank ? Math.Min(first, i) : i;
         }
     }
 }
