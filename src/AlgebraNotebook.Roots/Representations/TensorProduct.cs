@@ -11,7 +11,7 @@ namespace AlgebraNotebook.Roots.Representations;
 /// irreducible with highest weight (result - rho); sums that land on a chamber wall (a zero label) contribute nothing.
 /// Full characters are never multiplied (the reference variant that does so is kept as a test oracle).
 /// </summary>
-public static class TensorProduct
+public static partial class TensorProduct
 {
     /// <summary>Decomposes V1 x V2 x ... x Vn (n >= 1) into irreducibles; all factors must belong to the same algebra.</summary>
     /// <param name="factors">The irreducible factors.</param>
@@ -163,8 +163,12 @@ public static class TensorProduct
         return system;
     }
 
-    /// <summary>Brauer-Klimyk for two irreducibles of the same algebra; the factor of smaller dimension supplies its weights.</summary>
-    internal static List<(int[] Labels, BigInteger Multiplicity)> BrauerKlimyk(
+    /// <summary>
+    /// Reference variant of Brauer-Klimyk (the plain implementation, oracle of the packed one): every weight of the smaller
+    /// factor is listed as an array by <see cref="IrreducibleRepresentation.AllWeights"/> and reflected into the dominant
+    /// chamber; results accumulate in a dictionary of label arrays with big-integer multiplicities.
+    /// </summary>
+    internal static List<(int[] Labels, BigInteger Multiplicity)> BrauerKlimykReference(
         IrreducibleRepresentation a, IrreducibleRepresentation b, long maximumWeights, CancellationToken cancellationToken,
         ProgressMeter? meter = null)
     {
