@@ -1,7 +1,6 @@
 using System.Numerics;
 using System.Runtime.CompilerServices;
 using AlgebraNotebook.Exact;
-using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
 
 namespace AlgebraNotebook.Roots.Representations;
@@ -37,7 +36,7 @@ public sealed class CasimirInvariants
 
     private readonly (int[] Weight, BigInteger Multiplicity)[][] _referenceWeights;
     private readonly WeightGeometry[] _geometries;
-    private readonly int[][] _independent;
+    private readonly Lazy<int[][]> _independent;
 
     private CasimirInvariants(RootSystem system, IrreducibleRepresentation[] references)
     {
@@ -47,7 +46,7 @@ public sealed class CasimirInvariants
         _referenceWeights = references
             .Select(r => r.AllWeightsRaw(IrreducibleRepresentation.DefaultMaximumWeights, CancellationToken.None).ToArray())
             .ToArray();
-        _independent = Enumerable.Range(0, references.Length).Select(FindIndependentDegrees).ToArray();
+        _independent = new Lazy<int[][]>(() => Enumerable.Range(0, references.Length).Select(FindIndependentDegrees).ToArray());
     }
 
     /// <summary>The algebra.</summary>
@@ -59,7 +58,7 @@ public sealed class CasimirInvariants
     /// <summary>True when, for every simple factor, the power sums of the basic degrees are algebraically independent and so
     /// generate all Weyl invariants (hence all Casimir eigenvalues).</summary>
     public bool GeneratesAllInvariants => Enumerable.Range(0, References.Count)
-        .All(c => _independent[c].Length == System.Components[c].Rank);
+        .All(c => _independent.Value[c].Length == System.Components[c].Rank);
 
     /// <summary>
     /// The invariants with the default references (see the class remarks), cached per root system.
@@ -118,11 +117,12 @@ public sealed class CasimirInvariants
     /// <summary>
     /// The basic degrees of factor <paramref name="component"/> whose power sums are algebraically independent, chosen in
     /// ascending order (each power sum used once): a degree is kept when the gradient of its power sum raises the rank of the
-    /// Jacobian matrix of those kept so far, evaluated exactly at a fixed pseudo-random integer point (Jacobian criterion;
-    /// a chance zero at that point would only make the list shorter, never wrong in the other direction).
+    /// Jacobian matrix of those kept so far, evaluated at a fixed pseudo-random integer point in exact arithmetic modulo the
+    /// prime 2^61 - 1 (Jacobian criterion; a rank found modulo the prime is a lower bound of the rational rank, so a chance
+    /// zero could only make the list shorter, never wrong in the other direction). Computed on first use.
     /// </summary>
     /// <param name="component">Zero-based simple factor.</param>
-    public IReadOnlyList<int> IndependentDegrees(int component) => _independent[CheckComponent(component)];
+    public IReadOnlyList<int> IndependentDegrees(int component) => _independent.Value[CheckComponent(component)];
 
     /// <summary>
     /// The value of the power sum P_k^c(x) = sum over the weights mu of the reference of factor c of m(mu) (mu, x)^k, for a
@@ -182,13 +182,13 @@ public sealed class CasimirInvariants
     {
         var r = References[c];
         var missing = System.Components[c].Degrees.ToList();
-        foreach (var d in _independent[c])
+        foreach (var d in _independent.Value[c])
         {
             missing.Remove(d);
         }
 
         return $"{System.Components[c].Type}: C_k acts on V(lambda) as P_k(lambda + rho) - P_k(rho), P_k(x) = sum of (mu, x)^k over the weights mu of "
-            + $"the {r.Dimension} = {r.HighestWeight}; independent degrees {string.Join(", ", _independent[c])}"
+            + $"the {r.Dimension} = {r.HighestWeight}; independent degrees {string.Join(", ", _independent.Value[c])}"
             + (missing.Count == 0 ? " (all basic degrees)" : $"; basic degree(s) {string.Join(", ", missing)} not reached by these power sums");
     }));
 
@@ -240,6 +240,8 @@ public sealed class CasimirInvariants
         return new Rational(sum, BigInteger.Pow(geometry.GramScale, degree));
     }
 
+    private const long JacobianPrime = (1L << 61) - 1;
+
     private int[] FindIndependentDegrees(int component)
     {
         var geometry = _geometries[component];
@@ -250,14 +252,26 @@ public sealed class CasimirInvariants
         var random = new Random(20261202);
         var point = Enumerable.Range(0, rank).Select(_ => random.Next(1, 1_000_000)).ToArray();
         var kept = new List<int>();
-        var rows = new List<Rational[]>();
+        var pivots = new List<(int Column, long[] Row)>();
         foreach (var degree in System.Components[component].Degrees.Distinct())
         {
-            var gradient = Gradient(component, degree, point);
-            var candidate = rows.Append(gradient).ToArray();
-            if (LinearAlgebra.Rank(Matrix<Rational>.FromRows(candidate)) == candidate.Length)
+            var row = GradientModPrime(component, degree, point);
+            foreach (var (column, pivotRow) in pivots)
             {
-                rows.Add(gradient);
+                if (row[column] != 0)
+                {
+                    var factor = MulMod(row[column], InverseMod(pivotRow[column]));
+                    for (var j = 0; j < rank; j++)
+                    {
+                        row[j] = SubMod(row[j], MulMod(factor, pivotRow[j]));
+                    }
+                }
+            }
+
+            var pivot = Array.FindIndex(row, v => v != 0);
+            if (pivot >= 0)
+            {
+                pivots.Add((pivot, row));
                 kept.Add(degree);
             }
         }
@@ -265,26 +279,34 @@ public sealed class CasimirInvariants
         return kept.ToArray();
     }
 
-    private Rational[] Gradient(int component, int degree, int[] x)
+    private long[] GradientModPrime(int component, int degree, int[] x)
     {
-        // d/dx_j of sum m (mu, x)^k = k sum m (mu, x)^(k-1) (mu, omega_j), x in Dynkin labels.
+        // d/dx_j of sum m (mu, x)^k = k sum m (mu, x)^(k-1) (mu, omega_j), x in Dynkin labels; everything scaled by powers of
+        // the Gram denominator (a constant factor per row, which does not change the rank).
         var geometry = _geometries[component];
         var rank = geometry.Rank;
+        var prime = new BigInteger(JacobianPrime);
         var result = new BigInteger[rank];
         var unit = new int[rank];
         foreach (var (mu, multiplicity) in _referenceWeights[component])
         {
-            var power = multiplicity * BigInteger.Pow(geometry.ScaledInnerProduct(mu, x), degree - 1);
+            var power = multiplicity * BigInteger.ModPow(geometry.ScaledInnerProduct(mu, x), degree - 1, prime);
             for (var j = 0; j < rank; j++)
             {
                 unit[j] = 1;
-                result[j] += power * geometry.ScaledInnerProduct(mu, unit);
+                result[j] = (result[j] + power * geometry.ScaledInnerProduct(mu, unit)) % prime;
                 unit[j] = 0;
             }
         }
 
-        return result.Select(v => new Rational(v)).ToArray();
+        return result.Select(v => (long)(((v % prime) + prime) % prime)).ToArray();
     }
+
+    private static long MulMod(long a, long b) => (long)((UInt128)(ulong)a * (ulong)b % JacobianPrime);
+
+    private static long SubMod(long a, long b) => a >= b ? a - b : a - b + JacobianPrime;
+
+    private static long InverseMod(long a) => (long)BigInteger.ModPow(a, JacobianPrime - 2, JacobianPrime);
 
     private int[] Restrict(int component, int[] labels)
     {

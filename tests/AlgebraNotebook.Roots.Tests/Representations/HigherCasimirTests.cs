@@ -202,7 +202,9 @@ public class HigherCasimirTests(ITestOutputHelper output)
 
     [Theory]
     [InlineData("A5")]
+    [InlineData("A16")]
     [InlineData("B4")]
+    [InlineData("C12")]
     [InlineData("C4")]
     [InlineData("G2")]
     [InlineData("F4")]
