@@ -74,7 +74,8 @@ internal static partial class RepresentationDisplay
     /// <see cref="MaximumWeightRows"/> rows, by height from the highest weight down), reality, congruence class, the
     /// quadratic Casimir in the physics normalisation C₂ = (λ, λ + 2ρ)/2 with long roots of squared length 2 (adjoint:
     /// dual Coxeter number), and the Dynkin index dim V · C₂ / dim g (physics convention: su(N) fundamental 1/2),
-    /// per simple component when the algebra is not simple.
+    /// per simple component when the algebra is not simple; for a simple algebra also the higher Casimir eigenvalues at the
+    /// basic degrees above 2, normalised as in <see cref="CasimirInvariants"/> (reference representation named).
     /// </summary>
     public static MathNode FromIrreducible(IrreducibleRepresentation representation)
     {
@@ -122,7 +123,40 @@ internal static partial class RepresentationDisplay
             MathNodes.Product(MathNodes.Upright("dim"), MathNodes.Symbol("V"), c2),
             MathNodes.Product(MathNodes.Upright("dim"), MathNodes.Symbol("g")))));
         items.Words("so the fundamental of su(N) has index 1/2");
+        HigherCasimirs(items, representation);
         return items.ToRow();
+    }
+
+    /// <summary>
+    /// For a simple algebra with basic degrees above 2 reached by the power sums of <see cref="CasimirInvariants"/>:
+    /// C₃ = …, C₄ = …, then the normalisation C_k = P_k(λ + ρ) − P_k(ρ) and the reference representation.
+    /// </summary>
+    private static void HigherCasimirs(Card items, IrreducibleRepresentation representation)
+    {
+        if (!representation.System.IsSimple)
+        {
+            return;
+        }
+
+        var invariants = CasimirInvariants.Of(representation.System);
+        var degrees = invariants.IndependentDegrees(0).Where(d => d > 2).ToArray();
+        if (degrees.Length == 0)
+        {
+            return;
+        }
+
+        MathNode C(MathNode index) => new SubscriptNode(MathNodes.Symbol("C"), index);
+        MathNode P(MathNode argument) => MathNodes.Row(
+            new SubscriptNode(MathNodes.Symbol("P"), MathNodes.Symbol("k")), MathNodes.Fenced(argument));
+        items.Fact("higher Casimirs", List(degrees.Select(d => MathNodes.Row(
+            C(MathNodes.Integer(d)), MathNodes.Operator("="), MathDisplay.ToTree(representation.HigherCasimir(d))))));
+        var rho = MathNodes.Symbol("rho");
+        items.Formula(MathNodes.Row(
+            C(MathNodes.Symbol("k")),
+            MathNodes.Operator("="),
+            MathNodes.Sum(new SumTerm(false, P(MathNodes.Sum(MathNodes.Symbol("lambda"), rho))), new SumTerm(true, P(rho)))));
+        var reference = invariants.References[0];
+        items.Words($"P_k sums (mu, x)^k over the weights mu of the {reference.Name} = {reference.HighestWeight}");
     }
 
     /// <summary>

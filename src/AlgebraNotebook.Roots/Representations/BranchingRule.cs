@@ -284,11 +284,16 @@ public sealed class BranchingRule
     /// </summary>
     /// <param name="representation">An irreducible representation of <see cref="System"/>.</param>
     /// <param name="cancellationToken">Cancels the computation.</param>
-    /// <param name="maximumWeights">Cap on the number of distinct weights of the representation.</param>
+    /// <param name="maximumWeights">Cap on the number of distinct weights of the representation (checked from the dimension
+    /// and the Weyl orbit sizes of the dominant weights before any weight is listed).</param>
+    /// <param name="progress">Receives progress reports (optional): "Freudenthal multiplicities" and "Weyl orbits" of
+    /// <see cref="IrreducibleRepresentation.AllWeights"/>, then "projecting weights" (one unit per weight) and
+    /// "peeling irreducibles" (one unit per dominant weight of the restricted character used up).</param>
     public RepresentationSum Restrict(
         IrreducibleRepresentation representation,
         CancellationToken cancellationToken = default,
-        long maximumWeights = IrreducibleRepresentation.DefaultMaximumWeights)
+        long maximumWeights = IrreducibleRepresentation.DefaultMaximumWeights,
+        IProgress<RepresentationProgress>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(representation);
         if (!representation.System.Type.Equals(System.Type))
@@ -302,8 +307,11 @@ public sealed class BranchingRule
         var subRank = Subalgebra.Rank;
         var rank = System.Rank;
         var projected = new Dictionary<WeightKey, BigInteger>();
-        foreach (var (weight, multiplicity) in representation.AllWeightsRaw(maximumWeights, cancellationToken))
+        var weights = representation.AllWeightsRaw(maximumWeights, cancellationToken, progress);
+        var meter = new ProgressMeter(progress, cancellationToken, "projecting weights", weights.Count);
+        foreach (var (weight, multiplicity) in weights)
         {
+            meter.Advance();
             var image = new int[subRank];
             for (var r = 0; r < subRank; r++)
             {
@@ -334,7 +342,8 @@ public sealed class BranchingRule
             }
         }
 
-        var terms = CharacterPeeling.Peel(Subalgebra, CharacterPeeling.DominantPart(projected), cancellationToken);
+        meter.Finish();
+        var terms = CharacterPeeling.Peel(Subalgebra, CharacterPeeling.DominantPart(projected), cancellationToken, progress);
         CharacterPeeling.RequireNonNegative(terms, Description);
         var result = new RepresentationSum(Subalgebra, terms);
         if (result.Dimension != representation.Dimension)
@@ -373,7 +382,7 @@ public sealed class BranchingRule
         }
 
         // Validates the projection and the representation, and checks dimension, before the sectors are split.
-        Restrict(representation, cancellationToken, maximumWeights);
+        Restrict(representation, cancellationToken, maximumWeights, null);
         var geometry = representation.Geometry;
         var subRank = Subalgebra.Rank;
         var rank = System.Rank;

@@ -11,7 +11,8 @@ namespace AlgebraNotebook.Roots.Representations;
 internal static class CharacterPeeling
 {
     public static List<(int[] Labels, BigInteger Coefficient)> Peel(
-        RootSystem system, Dictionary<WeightKey, BigInteger> dominantCoefficients, CancellationToken cancellationToken)
+        RootSystem system, Dictionary<WeightKey, BigInteger> dominantCoefficients, CancellationToken cancellationToken,
+        IProgress<RepresentationProgress>? progress = null)
     {
         var geometry = GeometryCache.For(system);
         var comparer = Comparer<int[]>.Create((a, b) =>
@@ -28,10 +29,15 @@ internal static class CharacterPeeling
             }
         }
 
+        // For a true character every weight of V(top) is already present, so entries only shrink or vanish: the number of
+        // dominant weights removed measures progress and reaches the initial count at the end.
+        var initial = remaining.Count;
+        var meter = new ProgressMeter(progress, cancellationToken, "peeling irreducibles", initial);
         var result = new List<(int[] Labels, BigInteger Coefficient)>();
         while (remaining.Count > 0)
         {
             cancellationToken.ThrowIfCancellationRequested();
+            var before = remaining.Count;
             var (top, coefficient) = remaining.First();
             result.Add((top, coefficient));
             var irreducible = IrreducibleRepresentation.OfValidated(system, top);
@@ -48,6 +54,16 @@ internal static class CharacterPeeling
                     remaining[labels] = value;
                 }
             }
+
+            if (remaining.Count < before)
+            {
+                meter.Advance(before - remaining.Count);
+            }
+        }
+
+        if (progress is not null && initial > 0)
+        {
+            meter.Finish();
         }
 
         return result;

@@ -7,7 +7,7 @@ namespace AlgebraNotebook.Roots.Representations;
 /// Weight multiplicities of irreducible highest-weight modules by Freudenthal's formula (Humphreys 22.3):
 /// ((lambda + rho, lambda + rho) - (mu + rho, mu + rho)) m(mu) = 2 sum_{beta > 0} sum_{k >= 1} m(mu + k beta) (mu + k beta, beta).
 /// </summary>
-internal static class Freudenthal
+internal static partial class Freudenthal
 {
     /// <summary>
     /// Dominant weights of V(lambda): the dominant mu with lambda - mu in the positive root cone. Found by subtracting
@@ -46,8 +46,10 @@ internal static class Freudenthal
                     if (result.Count > cap)
                     {
                         throw new BeyondCapabilityException(
-                            $"The representation with highest weight ({string.Join(", ", highest)}) has more than {cap} dominant weights; " +
-                            "raise the dominant-weight cap to compute its multiplicities.");
+                            $"The representation with highest weight ({string.Join(", ", highest)}) (dimension {geometry.WeylDimension(highest)} " +
+                            $"by Weyl's formula) has more than {cap} dominant weights (counting stopped there); the limit is the " +
+                            "maximumDominantWeights argument of IrreducibleRepresentation.ComputeDominantWeights (default " +
+                            $"{IrreducibleRepresentation.DefaultMaximumDominantWeights}): pass a larger value to compute its multiplicities.");
                     }
                 }
             }
@@ -76,14 +78,20 @@ internal static class Freudenthal
     }
 
     /// <summary>
-    /// Multiplicities of the dominant weights only, using Weyl-orbit symmetry: m(mu + k beta) is read at the dominant
+    /// Reference variant of the dominant character (the plain implementation, kept as the oracle of the packed variant):
+    /// multiplicities of the dominant weights only, using Weyl-orbit symmetry: m(mu + k beta) is read at the dominant
     /// representative of mu + k beta, and the positive roots are summed one orbit of the stabiliser of mu at a time
-    /// (Moody and Patera, Bull. AMS 7 (1982)). Returned in the order of <see cref="DominantWeights"/>.
+    /// (Moody and Patera, Bull. AMS 7 (1982)). BigInteger arithmetic and dictionaries of label arrays. Returned in the order
+    /// of <see cref="DominantWeights"/>.
     /// </summary>
-    public static List<(int[] Weight, BigInteger Multiplicity)> DominantCharacter(
-        WeightGeometry geometry, int[] highest, long cap, CancellationToken cancellationToken)
+    public static List<(int[] Weight, BigInteger Multiplicity)> DominantCharacterReference(
+        WeightGeometry geometry, int[] highest, long cap, CancellationToken cancellationToken, IProgress<RepresentationProgress>? progress = null) =>
+        DominantCharacterReference(geometry, highest, DominantWeights(geometry, highest, cap, cancellationToken), cancellationToken, progress);
+
+    /// <summary>The reference variant on a list of dominant weights already found by <see cref="DominantWeights"/>.</summary>
+    public static List<(int[] Weight, BigInteger Multiplicity)> DominantCharacterReference(
+        WeightGeometry geometry, int[] highest, List<int[]> dominants, CancellationToken cancellationToken, IProgress<RepresentationProgress>? progress)
     {
-        var dominants = DominantWeights(geometry, highest, cap, cancellationToken);
         var multiplicity = new Dictionary<WeightKey, BigInteger>(dominants.Count);
         var rank = geometry.Rank;
         var shifted = new int[rank];
@@ -98,9 +106,10 @@ internal static class Freudenthal
         var nu = new int[rank];
         var reduced = new int[rank];
         var muShifted = new int[rank];
+        var meter = new ProgressMeter(progress, cancellationToken, MultiplicityStage, dominants.Count);
         foreach (var mu in dominants)
         {
-            cancellationToken.ThrowIfCancellationRequested();
+            meter.Advance();
             BigInteger m;
             if (result.Count == 0)
             {
@@ -161,6 +170,7 @@ internal static class Freudenthal
             result.Add((mu, m));
         }
 
+        meter.Finish();
         return result;
     }
 

@@ -103,6 +103,40 @@ public sealed partial class IrreducibleRepresentation
         return total;
     }
 
+    /// <summary>
+    /// The eigenvalue on V(lambda) of the Casimir element of the given degree, normalised as in
+    /// <see cref="CasimirInvariants"/> with the default reference representations: the sum over the simple factors of
+    /// P_k(lambda + rho) - P_k(rho), P_k(x) the sum of (mu, x)^k over the weights mu of the factor's smallest non-trivial
+    /// fundamental representation (e.g. the N of su(N), the 27 of E6, the 248 of E8). Degree 2 is 4 l(R) times
+    /// <see cref="QuadraticCasimir"/> (physics) per factor, l(R) the physics index of the reference R (su(N): 2 C2); odd degrees
+    /// change sign on the dual. Use <see cref="CasimirInvariants.Of(RootSystem, IrreducibleRepresentation[])"/> for another
+    /// reference, and <see cref="CasimirInvariants.IndependentDegrees"/> for which degrees are independent.
+    /// </summary>
+    /// <param name="degree">The degree k, from 1 to <see cref="CasimirInvariants.MaximumDegree"/>.</param>
+    public Rational HigherCasimir(int degree) => CasimirInvariants.Of(System).Eigenvalue(this, degree);
+
+    /// <summary>
+    /// The eigenvalues of the Casimirs at the basic degrees of a simple algebra (exponents + 1, ascending; a degree that occurs
+    /// twice, as n for D_n with n even, is listed once), normalised as in <see cref="HigherCasimir"/>. Throws
+    /// <see cref="ExactArgumentException"/> for a semisimple algebra that is not simple (use <see cref="CasimirInvariants"/>
+    /// per component).
+    /// </summary>
+    public IReadOnlyList<(int Degree, Rational Eigenvalue)> CasimirEigenvalues
+    {
+        get
+        {
+            if (System.Components.Count != 1)
+            {
+                throw new ExactArgumentException(
+                    $"{System.Type} has {System.Components.Count} simple factors; ask CasimirInvariants.EigenvalueOfComponent per factor.",
+                    nameof(CasimirEigenvalues));
+            }
+
+            var invariants = CasimirInvariants.Of(System);
+            return System.Degrees.Distinct().Select(d => (d, invariants.Eigenvalue(this, d))).ToArray();
+        }
+    }
+
     private Rational PhysicsCasimirOfSimple()
     {
         var shifted = _labels.Select(x => x + 2).ToArray();

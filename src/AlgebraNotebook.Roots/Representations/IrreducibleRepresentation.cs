@@ -110,14 +110,18 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
     public IReadOnlyList<WeightMultiplicity> DominantWeights => _dominantWeights ?? ComputeDominantWeights();
 
     /// <summary>
-    /// Computes (once) the dominant weights with multiplicities, as <see cref="DominantWeights"/>.
-    /// Throws <see cref="BeyondCapabilityException"/> when there are more than <paramref name="maximumDominantWeights"/>
-    /// dominant weights, and <see cref="OperationCanceledException"/> when cancelled.
+    /// Computes (once) the dominant weights with multiplicities, as <see cref="DominantWeights"/>. The dominant weights are
+    /// first counted without multiplicities (cheap: no Freudenthal sums); when there are more than
+    /// <paramref name="maximumDominantWeights"/> a <see cref="BeyondCapabilityException"/> states the dimension and the count
+    /// and names this argument, before any multiplicity is computed. <see cref="OperationCanceledException"/> when cancelled.
+    /// Progress: stage "Freudenthal multiplicities", one unit per dominant weight (none when the result is already cached).
     /// </summary>
     /// <param name="maximumDominantWeights">Cap on the number of dominant weights.</param>
     /// <param name="cancellationToken">Cancels the computation.</param>
+    /// <param name="progress">Receives progress reports (optional).</param>
     public IReadOnlyList<WeightMultiplicity> ComputeDominantWeights(
-        long maximumDominantWeights = DefaultMaximumDominantWeights, CancellationToken cancellationToken = default)
+        long maximumDominantWeights = DefaultMaximumDominantWeights, CancellationToken cancellationToken = default,
+        IProgress<RepresentationProgress>? progress = null)
     {
         if (_dominantWeights is not null)
         {
@@ -129,7 +133,7 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
             throw new ExactArgumentException($"maximumDominantWeights must be at least 1, not {maximumDominantWeights}.", nameof(maximumDominantWeights));
         }
 
-        var character = Freudenthal.DominantCharacter(Geometry, _labels, maximumDominantWeights, cancellationToken);
+        var character = Freudenthal.DominantCharacter(Geometry, _labels, maximumDominantWeights, cancellationToken, progress);
         _dominantLookup = character.ToDictionary(p => new WeightKey(p.Weight), p => p.Multiplicity);
         _dominantWeights = character.Select(p => new WeightMultiplicity(new Weight(p.Weight), p.Multiplicity)).ToArray();
         return _dominantWeights;
@@ -168,7 +172,7 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
     /// </summary>
     public BigInteger NumberOfDistinctWeights => CountDistinctWeights(CancellationToken.None);
 
-    private BigInteger CountDistinctWeights(CancellationToken cancellationToken)
+    internal BigInteger CountDistinctWeights(CancellationToken cancellationToken)
     {
         // The dominant weight set alone (no multiplicities) is enough, and much cheaper than Freudenthal's formula.
         var dominants = _dominantWeights is not null
@@ -185,13 +189,17 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
     /// </summary>
     /// <param name="maximumWeights">Cap on the number of distinct weights listed.</param>
     /// <param name="cancellationToken">Cancels the enumeration.</param>
-    public IReadOnlyList<WeightMultiplicity> AllWeights(long maximumWeights = DefaultMaximumWeights, CancellationToken cancellationToken = default)
+    /// <param name="progress">Receives progress reports (optional): the stage "Freudenthal multiplicities" of
+    /// <see cref="ComputeDominantWeights"/>, then "Weyl orbits", one unit per weight listed.</param>
+    public IReadOnlyList<WeightMultiplicity> AllWeights(
+        long maximumWeights = DefaultMaximumWeights, CancellationToken cancellationToken = default, IProgress<RepresentationProgress>? progress = null)
     {
-        var raw = AllWeightsRaw(maximumWeights, cancellationToken);
+        var raw = AllWeightsRaw(maximumWeights, cancellationToken, progress);
         return raw.Select(p => new WeightMultiplicity(new Weight(p.Weight), p.Multiplicity)).ToArray();
     }
 
-    internal List<(int[] Weight, BigInteger Multiplicity)> AllWeightsRaw(long maximumWeights, CancellationToken cancellationToken)
+    internal List<(int[] Weight, BigInteger Multiplicity)> AllWeightsRaw(
+        long maximumWeights, CancellationToken cancellationToken, IProgress<RepresentationProgress>? progress = null)
     {
         if (maximumWeights < 1)
         {
@@ -205,19 +213,25 @@ public sealed partial class IrreducibleRepresentation : IEquatable<IrreducibleRe
             {
                 throw new BeyondCapabilityException(
                     $"The representation {HighestWeight} of {System.Type} (dimension {Dimension}) has {count} distinct weights, " +
-                    $"more than the cap of {maximumWeights}; raise maximumWeights or work with the dominant weights.");
+                    $"more than the limit of {maximumWeights} (the maximumWeights argument, default {DefaultMaximumWeights}); " +
+                    "pass a larger value or work with the dominant weights.");
             }
         }
 
-        var result = new List<(int[] Weight, BigInteger Multiplicity)>();
-        foreach (var dominant in ComputeDominantWeights(DefaultMaximumDominantWeights, cancellationToken))
+        var dominants = ComputeDominantWeights(DefaultMaximumDominantWeights, cancellationToken, progress);
+        var total = dominants.Aggregate(BigInteger.Zero, (sum, p) => sum + Geometry.OrbitSize(p.Weight.Labels));
+        var meter = new ProgressMeter(progress, cancellationToken, "Weyl orbits", (long)total);
+        var result = new List<(int[] Weight, BigInteger Multiplicity)>((int)BigInteger.Min(total, int.MaxValue / 2));
+        foreach (var dominant in dominants)
         {
             foreach (var weight in Geometry.Orbit(dominant.Weight.Labels, cancellationToken))
             {
                 result.Add((weight, dominant.Multiplicity));
+                meter.Advance();
             }
         }
 
+        meter.Finish();
         return result;
     }
 

@@ -38,7 +38,19 @@ public static class RepresentationTable
     /// </summary>
     /// <param name="system">The algebra.</param>
     /// <param name="maximumDimension">Largest dimension listed, at least 1.</param>
-    public static IReadOnlyList<RepresentationTableRow> UpToDimension(RootSystem system, BigInteger maximumDimension)
+    public static IReadOnlyList<RepresentationTableRow> UpToDimension(RootSystem system, BigInteger maximumDimension) =>
+        UpToDimension(system, maximumDimension, CancellationToken.None);
+
+    /// <summary>
+    /// As <see cref="UpToDimension(RootSystem, BigInteger)"/>, cancellable and with progress: after the search (bounded by
+    /// <see cref="SearchBudget"/>), the stage "table rows" counts the rows filled (reality, congruence class, Casimir, index).
+    /// </summary>
+    /// <param name="system">The algebra.</param>
+    /// <param name="maximumDimension">Largest dimension listed, at least 1.</param>
+    /// <param name="cancellationToken">Cancels the computation.</param>
+    /// <param name="progress">Receives progress reports (optional).</param>
+    public static IReadOnlyList<RepresentationTableRow> UpToDimension(
+        RootSystem system, BigInteger maximumDimension, CancellationToken cancellationToken, IProgress<RepresentationProgress>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(system);
         if (maximumDimension < 1)
@@ -72,19 +84,27 @@ public static class RepresentationTable
             }
         }
 
-        return irreps
+        var meter = new ProgressMeter(progress, cancellationToken, "table rows", irreps.Count);
+        var rows = irreps
             .OrderBy(r => r.Dimension)
             .ThenBy(r => r.QuadraticCasimir())
             .ThenByDescending(r => r.Labels, Comparer<int[]>.Create(IrreducibleCatalogue.CompareLabels))
-            .Select(r => new RepresentationTableRow(
-                r.Name,
-                r.HighestWeight,
-                r.Dimension,
-                r.Reality,
-                r.CongruenceClass,
-                r.QuadraticCasimir(),
-                system.Components.Count == 1 ? r.DynkinIndex() : null,
-                r))
+            .Select(r =>
+            {
+                var row = new RepresentationTableRow(
+                    r.Name,
+                    r.HighestWeight,
+                    r.Dimension,
+                    r.Reality,
+                    r.CongruenceClass,
+                    r.QuadraticCasimir(),
+                    system.Components.Count == 1 ? r.DynkinIndex() : null,
+                    r);
+                meter.Advance();
+                return row;
+            })
             .ToArray();
+        meter.Finish();
+        return rows;
     }
 }

@@ -11,7 +11,7 @@ namespace AlgebraNotebook.Roots.Representations;
 /// irreducible with highest weight (result - rho); sums that land on a chamber wall (a zero label) contribute nothing.
 /// Full characters are never multiplied (the reference variant that does so is kept as a test oracle).
 /// </summary>
-public static class TensorProduct
+public static partial class TensorProduct
 {
     /// <summary>Decomposes V1 x V2 x ... x Vn (n >= 1) into irreducibles; all factors must belong to the same algebra.</summary>
     /// <param name="factors">The irreducible factors.</param>
@@ -19,32 +19,60 @@ public static class TensorProduct
 
     /// <summary>
     /// Decomposes a tensor product of irreducibles, folding from the left and always using the weights of the smaller
-    /// factor of each pairwise product. Throws <see cref="BeyondCapabilityException"/> when a factor used for its weights
-    /// has more than <paramref name="maximumWeights"/> distinct weights.
+    /// factor of each pairwise product. Before each step the work is estimated: the number of distinct weights of the smaller
+    /// factor of every pairwise product (from the dominant weights and Weyl orbit sizes, without listing them); a factor with
+    /// more than <paramref name="maximumWeights"/> distinct weights is refused with a <see cref="BeyondCapabilityException"/>
+    /// stating its count, before any weight is listed.
     /// </summary>
     /// <param name="factors">The irreducible factors (at least one, all of the same algebra).</param>
     /// <param name="cancellationToken">Cancels the computation.</param>
     /// <param name="maximumWeights">Cap on the number of distinct weights of the factor whose weights are enumerated.</param>
+    /// <param name="progress">Receives progress reports (optional): one stage per pairwise step, "Brauer-Klimyk step s of n",
+    /// one unit per weight added; the total is the estimate above.</param>
     public static RepresentationSum Decompose(
         IReadOnlyList<IrreducibleRepresentation> factors,
         CancellationToken cancellationToken,
-        long maximumWeights = IrreducibleRepresentation.DefaultMaximumWeights)
+        long maximumWeights = IrreducibleRepresentation.DefaultMaximumWeights,
+        IProgress<RepresentationProgress>? progress = null)
     {
         var system = RequireCommonSystem(factors, nameof(factors));
+        if (maximumWeights < 1)
+        {
+            throw new ExactArgumentException($"maximumWeights must be at least 1, not {maximumWeights}.", nameof(maximumWeights));
+        }
+
         var current = new Dictionary<WeightKey, BigInteger> { [new WeightKey(factors[0].Labels)] = BigInteger.One };
         for (var f = 1; f < factors.Count; f++)
         {
-            var next = new Dictionary<WeightKey, BigInteger>();
-            foreach (var (key, count) in current)
+            var pairs = current.Select(p => (Left: IrreducibleRepresentation.OfValidated(system, p.Key.Labels), Count: p.Value)).ToList();
+            var total = BigInteger.Zero;
+            foreach (var (left, _) in pairs)
             {
-                var left = IrreducibleRepresentation.OfValidated(system, key.Labels);
-                foreach (var (labels, multiplicity) in BrauerKlimyk(left, factors[f], maximumWeights, cancellationToken))
+                var small = left.Dimension >= factors[f].Dimension ? factors[f] : left;
+                var weights = small.CountDistinctWeights(cancellationToken);
+                if (weights > maximumWeights)
+                {
+                    throw new BeyondCapabilityException(
+                        $"Step {f} of the tensor product needs the weights of {small.HighestWeight} of {system.Type} (dimension " +
+                        $"{small.Dimension}): {weights} distinct weights, more than the limit of {maximumWeights} (the maximumWeights " +
+                        $"argument of TensorProduct.Decompose, default {IrreducibleRepresentation.DefaultMaximumWeights}); pass a larger value.");
+                }
+
+                total += weights;
+            }
+
+            var meter = new ProgressMeter(progress, cancellationToken, $"Brauer-Klimyk step {f} of {factors.Count - 1}", (long)total);
+            var next = new Dictionary<WeightKey, BigInteger>();
+            foreach (var (left, count) in pairs)
+            {
+                foreach (var (labels, multiplicity) in BrauerKlimyk(left, factors[f], maximumWeights, cancellationToken, meter))
                 {
                     var k = new WeightKey(labels);
                     next[k] = next.GetValueOrDefault(k) + count * multiplicity;
                 }
             }
 
+            meter.Finish();
             current = next;
         }
 
@@ -135,9 +163,14 @@ public static class TensorProduct
         return system;
     }
 
-    /// <summary>Brauer-Klimyk for two irreducibles of the same algebra; the factor of smaller dimension supplies its weights.</summary>
-    internal static List<(int[] Labels, BigInteger Multiplicity)> BrauerKlimyk(
-        IrreducibleRepresentation a, IrreducibleRepresentation b, long maximumWeights, CancellationToken cancellationToken)
+    /// <summary>
+    /// Reference variant of Brauer-Klimyk (the plain implementation, oracle of the packed one): every weight of the smaller
+    /// factor is listed as an array by <see cref="IrreducibleRepresentation.AllWeights"/> and reflected into the dominant
+    /// chamber; results accumulate in a dictionary of label arrays with big-integer multiplicities.
+    /// </summary>
+    internal static List<(int[] Labels, BigInteger Multiplicity)> BrauerKlimykReference(
+        IrreducibleRepresentation a, IrreducibleRepresentation b, long maximumWeights, CancellationToken cancellationToken,
+        ProgressMeter? meter = null)
     {
         var (large, small) = a.Dimension >= b.Dimension ? (a, b) : (b, a);
         var geometry = large.Geometry;
@@ -151,6 +184,8 @@ public static class TensorProduct
             {
                 cancellationToken.ThrowIfCancellationRequested();
             }
+
+            meter?.Advance();
 
             for (var i = 0; i < rank; i++)
             {

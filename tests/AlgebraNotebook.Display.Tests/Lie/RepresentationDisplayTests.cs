@@ -30,6 +30,17 @@ public class RepresentationDisplayTests
         var text = MathDisplay.ToPlainText(adjoint);
         Assert.Contains("dimension = 8, dominant weights = [[weight, multiplicity], [(1, 1), 1], [(0, 0), 2]], real, congruence class = root lattice, C_2 = 3", text);
         Assert.Contains("Dynkin index = 3", text);
+        // The cubic Casimir vanishes on the self-conjugate adjoint (odd invariant; common practice).
+        Assert.Contains("higher Casimirs = C_3 = 0, C_k = P_k(lambda + rho) - P_k(rho), P_k sums (mu, x)^k over the weights mu of the 3 = (1, 0)", text);
+    }
+
+    [Fact]
+    public void Card_of_the_su3_triplet_shows_its_cubic_Casimir()
+    {
+        // su(3) on (p, q): C3 proportional to (p - q)(2p + q + 3)(p + 2q + 3) (common practice, from memory); with the 3 as
+        // reference the constant is 1/9, so the 3 = (1, 0) gives 20/9.
+        var text = MathDisplay.ToPlainText(IrreducibleRepresentation.Of("A2", 1, 0));
+        Assert.Contains("higher Casimirs = C_3 = 20/9", text);
     }
 
     [Fact]
