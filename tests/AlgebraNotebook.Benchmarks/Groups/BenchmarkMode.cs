@@ -1,5 +1,6 @@
 using BenchmarkDotNet.Configs;
 using BenchmarkDotNet.Jobs;
+using BenchmarkDotNet.Toolchains.InProcess.Emit;
 
 namespace AlgebraNotebook.Benchmarks.Groups;
 
@@ -18,7 +19,8 @@ public static class BenchmarkMode
 
 /// <summary>
 /// For cases that take seconds each: in a full run, one warm-up and five measured iterations instead of the default
-/// statistics-driven count; in short mode nothing is added (the short job runs each case once).
+/// statistics-driven count, in-process (the generated-project build timed out on a loaded two-core machine, measured);
+/// in short mode nothing is added (the short job runs each case once).
 /// </summary>
 public sealed class FewIterationsConfig : ManualConfig
 {
@@ -27,7 +29,8 @@ public sealed class FewIterationsConfig : ManualConfig
     {
         if (!BenchmarkMode.IsShort)
         {
-            AddJob(Job.Default.WithWarmupCount(1).WithIterationCount(5).WithId("few-iterations"));
+            AddJob(Job.Default.WithWarmupCount(1).WithIterationCount(5)
+                .WithToolchain(new InProcessEmitToolchain(TimeSpan.FromMinutes(30), logOutput: true)).WithId("few-iterations"));
         }
     }
 }

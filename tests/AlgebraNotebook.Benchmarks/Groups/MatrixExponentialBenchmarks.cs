@@ -10,6 +10,7 @@ namespace AlgebraNotebook.Benchmarks.Groups;
 /// with D the direct sum of rotation generators of rates 1 and 2, the block [[1, -1], [1, 1]] (eigenvalues 1 +- i)
 /// and a nilpotent 2x2 Jordan block, and P a unimodular integer matrix, so X is dense and not diagonalisable.
 /// </summary>
+[Config(typeof(FewIterationsConfig))]
 public class MatrixExponentialBenchmarks
 {
     private Matrix<Rational> _generator = null!;
