@@ -51,7 +51,7 @@ internal sealed class BinaryExpansion(int[] words, long[] coefficients)
 internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, BinaryLyndonTable? target)
 {
     // Entries kept in the view memo before it is cleared (bounds its memory: 12 bytes an entry).
-    private const long MemoBudget = 1 << 22;
+    private const long MemoBudget = 1 << 20;
 
     private readonly Dictionary<long, BinaryExpansion> _views = new();
     private long _viewEntries;
@@ -175,12 +175,6 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
             _scratch = new long[1 << length];
         }
 
-        var needed = (left1.Words.Length * right1.Words.Length) + (left2.Words.Length * right2.Words.Length);
-        if (_touched.Length < needed)
-        {
-            _touched = new int[Math.Max(needed, 2 * _touched.Length)];
-        }
-
         var allowed = table?.FactorBits(length, offset);
         var count = Accumulate(left1, right1, shift1, 1, allowed, 0);
         count = Accumulate(left2, right2, shift2, -1, allowed, count);
@@ -227,7 +221,6 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
     private int Accumulate(BinaryExpansion left, BinaryExpansion right, int shift, long sign, ulong[]? allowed, int count)
     {
         var scratch = _scratch;
-        var touched = _touched;
         var rw = right.Words;
         var rc = right.Coefficients;
         if (left.Words.Length == 0 || rw.Length == 0)
@@ -243,6 +236,8 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
             {
                 for (var i = 0; i < left.Words.Length; i++)
                 {
+                    // At most 64 products per block of the allowed set.
+                    var touched = EnsureTouched(count + (64 * blockWords));
                     var baseWord = left.Words[i] << shift;
                     var cx = sign * left.Coefficients[i];
                     var first = baseWord >> 6;
@@ -276,6 +271,7 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
         {
             for (var i = 0; i < left.Words.Length; i++)
             {
+                var touched = EnsureTouched(count + rw.Length);
                 var x = left.Words[i] << shift;
                 var cx = sign * left.Coefficients[i];
                 for (var j = 0; j < rw.Length; j++)
@@ -288,6 +284,17 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
         }
 
         return count;
+    }
+
+    // The touched-index list grows by doubling, to what the products really reach (not their worst case).
+    private int[] EnsureTouched(int size)
+    {
+        if (_touched.Length < size)
+        {
+            Array.Resize(ref _touched, Math.Max(size, 2 * _touched.Length));
+        }
+
+        return _touched;
     }
 
     // index[word] = position + 1 for the words of the list (the caller clears it after use).
