@@ -57,6 +57,7 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
     private long _viewEntries;
     private long[] _scratch = [];
     private int[] _touched = [];
+    private long[] _values = [];
     private int[] _index = [];
     private BinaryLyndonTable? _target = target;
 
@@ -181,37 +182,33 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
         var scratch = _scratch;
         var touched = _touched;
 
-        // First pass: count the kept words; second pass: copy them and clear the scratch.
-        var kept = 0;
-        for (var t = 0; t < count; t++)
+        // Move the kept words to the front of the touched list (values to a reusable buffer) and clear the scratch; an
+        // index listed twice (its value went back to zero and was touched again) finds the scratch already cleared.
+        if (_values.Length < count)
         {
-            var index = touched[t];
-            if (scratch[index] != 0 && (table is null || table.IsFactorAt(index, length, offset)))
-            {
-                kept++;
-            }
+            _values = new long[Math.Max(count, 2 * _values.Length)];
         }
 
-        var words = new int[kept];
-        var coefficients = new long[kept];
-        var k = 0;
+        var values = _values;
+        var kept = 0;
         for (var t = 0; t < count; t++)
         {
             var index = touched[t];
             var value = scratch[index];
             if (value != 0)
             {
+                scratch[index] = 0;
                 if (table is null || table.IsFactorAt(index, length, offset))
                 {
-                    words[k] = index;
-                    coefficients[k] = value;
-                    k++;
+                    touched[kept] = index;
+                    values[kept] = value;
+                    kept++;
                 }
-
-                scratch[index] = 0;
             }
         }
 
+        var words = touched.AsSpan(0, kept).ToArray();
+        var coefficients = values.AsSpan(0, kept).ToArray();
         return new BinaryExpansion(words, coefficients);
     }
 
@@ -251,8 +248,13 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
                             var j = index[product - baseWord];
                             if (j != 0)
                             {
-                                touched[count++] = product;
-                                scratch[product] += cx * rc[j - 1];
+                                var before = scratch[product];
+                                if (before == 0)
+                                {
+                                    touched[count++] = product;
+                                }
+
+                                scratch[product] = before + (cx * rc[j - 1]);
                             }
                         }
                     }
@@ -277,8 +279,13 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
                 for (var j = 0; j < rw.Length; j++)
                 {
                     var product = x | rw[j];
-                    touched[count++] = product;
-                    scratch[product] += cx * rc[j];
+                    var before = scratch[product];
+                    if (before == 0)
+                    {
+                        touched[count++] = product;
+                    }
+
+                    scratch[product] = before + (cx * rc[j]);
                 }
             }
         }
@@ -286,7 +293,8 @@ internal sealed class BinaryExpansionWorker(BinaryBracketExpansions shared, Bina
         return count;
     }
 
-    // The touched-index list grows by doubling, to what the products really reach (not their worst case).
+    // The touched-index list holds each word when its value leaves zero, so it stays near the number of distinct words
+    // reached (it once grew to billions of entries at degree 22 when every product was listed); it grows by doubling.
     private int[] EnsureTouched(int size)
     {
         if (_touched.Length < size)
