@@ -16,7 +16,7 @@ public sealed class SeriesLimits
 
     /// <summary>
     /// The default degree cap of the word-coefficient method: 22. Its time grows about threefold per degree (degree 20:
-    /// about 11 s of processor time, measured), so degree 22 is already minutes.
+    /// 7-11 s of processor time, measured), so degree 22 is already minutes.
     /// </summary>
     public const int DefaultMaxWordCoefficientDegree = 22;
 
