@@ -18,7 +18,17 @@ public static class Program
     /// <summary>Runs the benchmarks; returns 0 when every benchmark ran, 1 otherwise.</summary>
     public static int Main(string[] args)
     {
+        if (args.Length > 0 && args[0] == Groups.BchWholeRun.Switch)
+        {
+            return Groups.BchWholeRun.Run(args[1..]);
+        }
+
         var shortMode = args.Contains("--short");
+        if (shortMode)
+        {
+            Environment.SetEnvironmentVariable(Groups.BenchmarkMode.ShortVariable, "1");
+        }
+
         var rest = args.Where(a => a != "--short").ToArray();
         IConfig config = DefaultConfig.Instance.AddDiagnoser(MemoryDiagnoser.Default);
         if (shortMode)

@@ -38,6 +38,18 @@ public sealed class LieSeries : IEquatable<LieSeries>
             .ToArray();
     }
 
+    // Terms already merged, non-zero, below the order and sorted by degree then word (trusted callers only).
+    private LieSeries(FreeLieAlgebra algebra, (LyndonWord Word, Rational Coefficient)[] sortedTerms, int order, bool trusted)
+    {
+        _ = trusted;
+        Algebra = algebra;
+        Order = order;
+        _terms = sortedTerms;
+    }
+
+    internal static LieSeries FromSortedTerms(FreeLieAlgebra algebra, (LyndonWord Word, Rational Coefficient)[] sortedTerms, int order) =>
+        new(algebra, sortedTerms, order, trusted: true);
+
     /// <summary>The free Lie algebra this element lives in.</summary>
     public FreeLieAlgebra Algebra { get; }
 

@@ -11,7 +11,10 @@ namespace AlgebraNotebook.Groups.Series;
 /// basis of the free Lie algebra, to a chosen degree N. Results are <see cref="LieSeries"/> with truncation order N + 1.
 /// </summary>
 /// <remarks>
-/// Method: (1) in the free associative algebra truncated after degree N, stored densely per degree, form the product
+/// Default method for log(e^x e^y) with two generators: <see cref="BakerCampbellHausdorffMethod.WordCoefficients"/>
+/// (coefficients of Lyndon words from their runs, then a triangular solve on Lyndon words only; see the enum). The
+/// other entry points, and <see cref="BakerCampbellHausdorffMethod.AssociativeLogarithm"/> (the reference variant):
+/// (1) in the free associative algebra truncated after degree N, stored densely per degree, form the product
 /// of the truncated exponentials and its logarithm sum (-1)^(m+1) u^m / m with u = product - 1 as the right factor
 /// of every power (u is sparse: for e^X e^Y it has (d + 1) words in degree d), costing about N^2 k^N rational
 /// multiply-adds for k generators; (2) project each degree onto the Lyndon basis by triangular peeling (see
@@ -25,15 +28,54 @@ public static class BakerCampbellHausdorff
     /// <exception cref="ExactArgumentException">Degree below 1.</exception>
     /// <exception cref="BeyondCapabilityException">The degree exceeds the size cap (the message gives the estimated size).</exception>
     public static LieSeries Series(int degree, SeriesLimits? limits = null) =>
-        Series(new FreeLieAlgebra("X", "Y"), "X", "Y", degree, limits);
+        Series(new FreeLieAlgebra("X", "Y"), "X", "Y", degree, BakerCampbellHausdorffMethod.WordCoefficients, limits);
+
+    /// <summary>log(e^X e^Y) to degree N on generators X &lt; Y, by a chosen method (both give the same series).</summary>
+    /// <exception cref="ExactArgumentException">Degree below 1 or an unknown method.</exception>
+    /// <exception cref="BeyondCapabilityException">The degree exceeds the cap of the method.</exception>
+    public static LieSeries Series(int degree, BakerCampbellHausdorffMethod method, SeriesLimits? limits = null) =>
+        Series(new FreeLieAlgebra("X", "Y"), "X", "Y", degree, method, limits);
 
     /// <summary>log(e^x e^y) to degree N for two generators of a free Lie algebra.</summary>
     /// <exception cref="ExactArgumentException">Degree below 1 or an unknown generator.</exception>
-    /// <exception cref="BeyondCapabilityException">The degree exceeds the size cap.</exception>
-    public static LieSeries Series(FreeLieAlgebra algebra, string x, string y, int degree, SeriesLimits? limits = null)
+    /// <exception cref="BeyondCapabilityException">The degree exceeds the cap.</exception>
+    public static LieSeries Series(FreeLieAlgebra algebra, string x, string y, int degree, SeriesLimits? limits = null) =>
+        Series(algebra, x, y, degree, BakerCampbellHausdorffMethod.WordCoefficients, limits);
+
+    /// <summary>
+    /// log(e^x e^y) to degree N for two generators of a free Lie algebra, by a chosen method. The word-coefficient
+    /// method needs two different generators; for x = y the reference method runs (the answer is 2x).
+    /// </summary>
+    /// <exception cref="ExactArgumentException">Degree below 1, an unknown generator or an unknown method.</exception>
+    /// <exception cref="BeyondCapabilityException">The degree exceeds the cap of the method.</exception>
+    public static LieSeries Series(FreeLieAlgebra algebra, string x, string y, int degree, BakerCampbellHausdorffMethod method, SeriesLimits? limits = null)
     {
         ArgumentNullException.ThrowIfNull(algebra);
-        return LogOfProduct([algebra.Generator(x), algebra.Generator(y)], degree, limits, "Baker-Campbell-Hausdorff series");
+        var gx = algebra.Generator(x);
+        var gy = algebra.Generator(y);
+        const string what = "Baker-Campbell-Hausdorff series";
+        switch (method)
+        {
+            case BakerCampbellHausdorffMethod.WordCoefficients when x != y:
+                (limits ?? SeriesLimits.Default).CheckWordCoefficientDegree(what, degree);
+                var ix = algebra.Alphabet.IndexOf(x);
+                var iy = algebra.Alphabet.IndexOf(y);
+                var terms = BchLyndonSolver.TrySolve(degree, Math.Min(ix, iy), Math.Max(ix, iy), firstIsSmall: ix < iy);
+                if (terms is not null)
+                {
+                    return LieSeries.FromSortedTerms(algebra, terms.ToArray(), degree + 1);
+                }
+
+                break;
+            case BakerCampbellHausdorffMethod.WordCoefficients:
+            case BakerCampbellHausdorffMethod.AssociativeLogarithm:
+                break;
+            default:
+                throw new ExactArgumentException($"Unknown Baker-Campbell-Hausdorff method {(int)method}.", nameof(method));
+        }
+
+        // Reference variant; also the fallback when a 128-bit value of the word-coefficient method overflows.
+        return LogOfProduct([gx, gy], degree, limits, what);
     }
 
     /// <summary>The symmetric form log(e^(X/2) e^Y e^(X/2)) to degree N on generators X &lt; Y; its even-degree parts vanish.</summary>

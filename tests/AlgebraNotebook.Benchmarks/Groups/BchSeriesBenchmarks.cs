@@ -3,15 +3,48 @@ using BenchmarkDotNet.Attributes;
 
 namespace AlgebraNotebook.Benchmarks.Groups;
 
-/// <summary>log(e^X e^Y) in the Lyndon basis to a given degree (the issue 8 workload; the count of non-zero
-/// coefficients at degree 20 is 76,760).</summary>
+/// <summary>
+/// log(e^X e^Y) in the Lyndon basis to degree N: the word-coefficient method (the default) beside the associative
+/// reference method, at degrees where the reference finishes in a few seconds.
+/// </summary>
+[Config(typeof(FewIterationsConfig))]
 public class BchSeriesBenchmarks
 {
+    private static readonly SeriesLimits Unlimited = new(1L << 40, SeriesLimits.WordCoefficientDegreeLimit);
+
+    /// <summary>The degrees compared (short mode: 8).</summary>
+    public static IEnumerable<int> Degrees => BenchmarkMode.IsShort ? [8] : [10, 12, 14, 16];
+
     /// <summary>The truncation degree.</summary>
-    [Params(10, 12)]
+    [ParamsSource(nameof(Degrees))]
     public int Degree { get; set; }
 
-    /// <summary>The whole series in the Lyndon basis, as the library computes it by default.</summary>
+    /// <summary>The default method; returns the number of non-zero coefficients.</summary>
+    [Benchmark(Baseline = true)]
+    public int WordCoefficients() => BakerCampbellHausdorff.Series(Degree, BakerCampbellHausdorffMethod.WordCoefficients, Unlimited).Terms.Count;
+
+    /// <summary>The reference method (exp and log in the truncated free associative algebra, then projection).</summary>
     [Benchmark]
-    public int LyndonCoefficients() => BakerCampbellHausdorff.Series(Degree).Terms.Count;
+    public int AssociativeLogarithm() => BakerCampbellHausdorff.Series(Degree, BakerCampbellHausdorffMethod.AssociativeLogarithm, Unlimited).Terms.Count;
+}
+
+/// <summary>
+/// Scaling of the word-coefficient method with the degree (the reference is left out: above degree 16 it takes tens
+/// of seconds and gigabytes). Degrees 22 and 24 are measured as whole runs (see <see cref="BchWholeRun"/>).
+/// </summary>
+[Config(typeof(FewIterationsConfig))]
+public class BchScalingBenchmarks
+{
+    private static readonly SeriesLimits Unlimited = new(1L << 40, SeriesLimits.WordCoefficientDegreeLimit);
+
+    /// <summary>The degrees (short mode: 10).</summary>
+    public static IEnumerable<int> Degrees => BenchmarkMode.IsShort ? [10] : [12, 14, 16, 18, 20];
+
+    /// <summary>The truncation degree.</summary>
+    [ParamsSource(nameof(Degrees))]
+    public int Degree { get; set; }
+
+    /// <summary>The whole series; returns the number of non-zero coefficients.</summary>
+    [Benchmark]
+    public int WordCoefficients() => BakerCampbellHausdorff.Series(Degree, BakerCampbellHausdorffMethod.WordCoefficients, Unlimited).Terms.Count;
 }

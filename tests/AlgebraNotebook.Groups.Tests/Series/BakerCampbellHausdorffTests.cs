@@ -119,10 +119,10 @@ public class BakerCampbellHausdorffTests
     {
         var e = Assert.Throws<ExactArgumentException>(() => BakerCampbellHausdorff.Series(0));
         Assert.Contains("at least 1", e.Message);
-        var big = Assert.Throws<BeyondCapabilityException>(() => BakerCampbellHausdorff.Series(30));
+        var big = Assert.Throws<BeyondCapabilityException>(() => BakerCampbellHausdorff.Series(30, BakerCampbellHausdorffMethod.AssociativeLogarithm));
         Assert.Contains("2,147,483,646 words", big.Message);
         Assert.Contains("cap", big.Message);
-        var capped = Assert.Throws<BeyondCapabilityException>(() => BakerCampbellHausdorff.Series(5, new SeriesLimits(20)));
+        var capped = Assert.Throws<BeyondCapabilityException>(() => BakerCampbellHausdorff.Series(5, BakerCampbellHausdorffMethod.AssociativeLogarithm, new SeriesLimits(20)));
         Assert.Contains("62 words", capped.Message);
         Assert.Throws<ExactArgumentException>(() => BakerCampbellHausdorff.Series(XY, "X", "W", 3));
         Assert.Throws<ExactArgumentException>(() => BakerCampbellHausdorff.ProductOfExponentials([], 3));
