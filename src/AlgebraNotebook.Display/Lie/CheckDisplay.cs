@@ -25,7 +25,7 @@ internal static class CheckDisplay
         {
             new[] { MathNodes.Text("real form"), MathNodes.Text(identification.Name) },
         };
-        if (identification.Candidates.Count > 1)
+        if (identification.Candidates.Count > 1 && !identification.Name.Contains(" or ", StringComparison.Ordinal))
         {
             rows.Add(new[] { MathNodes.Text("also written"), MathNodes.Text(string.Join(", ", identification.Candidates)) });
         }
@@ -94,7 +94,7 @@ internal static class CheckDisplay
                 }
 
                 var bracket = MathNodes.Fenced(MathNodes.Row(MathNodes.Symbol(names[i]), MathNodes.Operator(","), MathNodes.Symbol(names[j])), FenceKind.Brackets);
-                rows.Add(new[] { bracket, MathNodes.Operator("="), MathNodes.Sum(terms) });
+                rows.Add(new[] { MathNodes.Row(bracket, MathNodes.Operator("="), MathNodes.Sum(terms)) });
             }
         }
 
@@ -110,15 +110,6 @@ internal static class CheckDisplay
             MathNodes.Fenced(OperatorDisplay.FromDifferentialOperator(derivatives.Operator)),
             MathNodes.Symbol(derivatives.FunctionName));
 
-    /// <summary>The verdict ("a real logarithm exists", "no real logarithm" or "undecided") followed by its explanation, as text.</summary>
-    public static MathNode FromRealLogarithmVerdict(RealLogarithmVerdict verdict) =>
-        MathNodes.Row(
-            MathNodes.Text(verdict.Answer switch
-            {
-                RealLogarithmAnswer.Exists => "a real logarithm exists",
-                RealLogarithmAnswer.DoesNotExist => "no real logarithm",
-                _ => "undecided",
-            }),
-            MathNodes.Operator(":"),
-            MathNodes.Text(verdict.Explanation));
+    /// <summary>The explanation of the verdict as text; it starts with the answer ("A real logarithm exists", "No real logarithm", ...).</summary>
+    public static MathNode FromRealLogarithmVerdict(RealLogarithmVerdict verdict) => MathNodes.Text(verdict.Explanation);
 }
