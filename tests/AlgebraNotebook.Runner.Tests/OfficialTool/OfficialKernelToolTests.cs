@@ -88,10 +88,8 @@ public class OfficialKernelToolTests
                 Assert.Contains("<math display=\"block\" xmlns=\"http://www.w3.org/1998/Math/MathML\"", html);
                 var storedResult = storedCell.Outputs.Single(o => o.OutputType == StoredOutput.ExecuteResult);
                 Assert.Equal(storedResult.Data["text/html"], html);
-                if (values.TryGetValue("text/plain", out var plain))
-                {
-                    Assert.Equal(storedResult.Data["text/plain"], plain);
-                }
+                Assert.True(values.TryGetValue("text/plain", out var plain), $"{label}: no text/plain result.");
+                Assert.Equal(storedResult.Data["text/plain"], plain);
 
                 mathResults++;
             }
