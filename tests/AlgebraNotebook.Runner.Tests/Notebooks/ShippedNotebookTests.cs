@@ -58,10 +58,43 @@ public class ShippedNotebookTests
         Assert.Contains(codeCells.SelectMany(c => c.Outputs), o => o.Data.TryGetValue("text/html", out var html) && html.Contains("<math", StringComparison.Ordinal));
     }
 
+    /// <summary>The file names of notebooks/*.dib, sorted.</summary>
+    public static TheoryData<string> ShippedDibNotebooks()
+    {
+        var data = new TheoryData<string>();
+        foreach (var path in Directory.GetFiles(Path.Combine(RepositoryPaths.Root, "notebooks"), "*.dib").Order(StringComparer.Ordinal))
+        {
+            data.Add(Path.GetFileName(path));
+        }
+
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(ShippedDibNotebooks))]
+    public async Task Shipped_dib_notebook_runs_and_its_written_outputs_reproduce(string fileName)
+    {
+        // A .dib file stores no outputs: run it, write the outputs to an .ipynb, and check that file.
+        using var temp = new TempNotebook();
+        var written = Path.Combine(temp.Folder, Path.ChangeExtension(fileName, ".ipynb"));
+        var source = Path.Combine(RepositoryPaths.Root, "notebooks", fileName);
+        var stdout = new StringWriter();
+        var stderr = new StringWriter();
+        var code = await RunnerApp.RunAsync(new[] { "run", source, "--output", Path.Combine(temp.Folder, "report.html"), "--write-notebook", written, "--quiet" }, stdout, stderr);
+        Assert.True(code == RunnerApp.ExitSuccess, $"run {fileName} exited with {code}.{Environment.NewLine}{stderr}");
+        var stored = StoredNotebook.Load(written);
+        Assert.Contains(stored.Cells.SelectMany(c => c.Outputs), o => o.Data.TryGetValue("text/html", out var html) && html.Contains("<math", StringComparison.Ordinal));
+        stdout = new StringWriter();
+        code = await RunnerApp.RunAsync(new[] { "check", written, "--quiet" }, stdout, stderr);
+        Assert.True(code == RunnerApp.ExitSuccess, $"check of the outputs written from {fileName} exited with {code}.{Environment.NewLine}{stdout}{Environment.NewLine}{stderr}");
+    }
+
     [Fact]
     public void Between_four_and_six_notebooks_are_shipped_and_the_quick_start_one_is_among_them()
     {
-        var names = Directory.GetFiles(Path.Combine(RepositoryPaths.Root, "notebooks"), "*.ipynb").Select(Path.GetFileName).ToList();
+        var names = Directory.GetFiles(Path.Combine(RepositoryPaths.Root, "notebooks"))
+            .Where(p => p.EndsWith(".ipynb", StringComparison.Ordinal) || p.EndsWith(".dib", StringComparison.Ordinal))
+            .Select(Path.GetFileName).ToList();
         Assert.InRange(names.Count, 4, 6);
         Assert.Contains(Path.GetFileName(RepositoryPaths.DemoNotebook), names);
     }
