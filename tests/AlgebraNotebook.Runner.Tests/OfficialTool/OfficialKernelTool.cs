@@ -14,6 +14,13 @@ internal static class OfficialKernelTool
 
     private static readonly Lazy<(string? Executable, string Message)> Installation = new(Install);
 
+    /// <summary>
+    /// The tool path, one per tool version in the temporary directory, reused by later test runs: the install runs when
+    /// the test is discovered (to decide whether to skip), also in runs that filter the test out, so a kept install
+    /// makes discovery cost nothing after the first time.
+    /// </summary>
+    public static string ToolPath { get; } = Path.Combine(Path.GetTempPath(), "algebranotebook-official-tool-" + Version);
+
     /// <summary>The installed executable, or null with the installer's message.</summary>
     public static (string? Executable, string Message) Installed => Installation.Value;
 
@@ -63,12 +70,17 @@ internal static class OfficialKernelTool
 
     private static (string? Executable, string Message) Install()
     {
-        var toolPath = Path.Combine(Path.GetTempPath(), "algebranotebook-official-tool-" + Guid.NewGuid().ToString("N")[..8]);
+        var toolPath = ToolPath;
+        var executable = Path.Combine(toolPath, OperatingSystem.IsWindows() ? "dotnet-interactive.exe" : "dotnet-interactive");
+        if (File.Exists(executable))
+        {
+            return (executable, $"{PackageId} {Version} already installed in {toolPath}");
+        }
+
         var watch = Stopwatch.StartNew();
         var (code, output) = Run(DotnetHost(),
             new[] { "tool", "install", PackageId, "--version", Version, "--tool-path", toolPath },
             Path.GetTempPath(), TimeSpan.FromMinutes(3));
-        var executable = Path.Combine(toolPath, OperatingSystem.IsWindows() ? "dotnet-interactive.exe" : "dotnet-interactive");
         return code == 0 && File.Exists(executable)
             ? (executable, $"installed {PackageId} {Version} in {watch.Elapsed.TotalSeconds:0.0} s")
             : (null, $"'dotnet tool install {PackageId} --version {Version} --tool-path {toolPath}' failed with exit code {code}: {output.Trim()}");
