@@ -91,7 +91,9 @@ public static partial class MathDisplay
     /// <c>&lt;div class="algebranotebook-math" data-latex="..."&gt;&lt;math display="block" ...&gt;...&lt;/math&gt;&lt;/div&gt;</c>.
     /// The LaTeX of the same value is kept, attribute-escaped, in the <c>data-latex</c> attribute of the div so that
     /// a copy action or script can offer it. The MathML is <see cref="ToMathML"/> with one addition: a
-    /// <c>style</c> attribute choosing a math font (<see cref="HtmlMathStyle"/>).
+    /// <c>style</c> attribute choosing a math font (<see cref="HtmlMathStyle"/>). A long table (more than 30 rows, such
+    /// as a large weight system) is folded: its first 30 rows are shown and the rest sit in an HTML <c>details</c>
+    /// element whose summary says how many rows it holds, so the front end shows the size and first rows at once.
     /// </summary>
     /// <exception cref="AlgebraNotebook.Exact.ExactArgumentException">The value cannot be rendered (the message names its type).</exception>
     public static string ToHtml(object value)
@@ -100,7 +102,9 @@ public static partial class MathDisplay
         var html = new StringBuilder();
         html.Append("<div class=\"").Append(HtmlClass).Append("\" data-latex=\"");
         XmlText.Append(html, LatexRenderer.Render(tree));
-        html.Append("\">").Append(MathMLRenderer.Render(tree, HtmlMathStyle)).Append("</div>");
+        html.Append("\">");
+        FoldedHtml.Append(html, tree, HtmlMathStyle);
+        html.Append("</div>");
         return html.ToString();
     }
 }

@@ -42,7 +42,22 @@ public static class AlgebraNotebookFormatters
         .ToArray();
 
     /// <summary>
-    /// Registers the formatters and preferred MIME types for every type in <see cref="RegisteredTypes"/>. Each call
+    /// The collection types that the display layer renders as one table (for example the weight system
+    /// <c>WeightMultiplicity[]</c> of AllWeights, or a representation table <c>RepresentationTableRow[]</c>): every
+    /// array <c>T[]</c> and <c>List&lt;T&gt;</c> of a non-generic type T in <see cref="RegisteredTypes"/> for which
+    /// <see cref="MathDisplay.CanRenderType"/> is true. Without their own registration these would get the formatting
+    /// library's list formatter, which shows one cell per element and no plain text. Sorted by full name.
+    /// </summary>
+    public static IReadOnlyList<Type> RegisteredCollectionTypes { get; } = RegisteredTypes
+        .Where(t => !t.IsGenericTypeDefinition)
+        .SelectMany(t => new[] { t.MakeArrayType(), typeof(List<>).MakeGenericType(t) })
+        .Where(MathDisplay.CanRenderType)
+        .OrderBy(t => t.FullName, StringComparer.Ordinal)
+        .ToArray();
+
+    /// <summary>
+    /// Registers the formatters and preferred MIME types for every type in <see cref="RegisteredTypes"/> and
+    /// <see cref="RegisteredCollectionTypes"/>. Each call
     /// registers again (the newest registration wins), so it also restores the formatters after
     /// <see cref="Formatter.ResetToDefault"/>; call it once per kernel or host, not per value. The diagram formatters
     /// (<see cref="DiagramFormatters"/>) are registered too.
@@ -51,7 +66,7 @@ public static class AlgebraNotebookFormatters
     {
         lock (Gate)
         {
-            foreach (var type in RegisteredTypes)
+            foreach (var type in RegisteredTypes.Concat(RegisteredCollectionTypes))
             {
                 Formatter.Register(type, (FormatDelegate<object>)WriteHtml, HtmlMimeType);
                 Formatter.Register(type, (FormatDelegate<object>)WritePlainText, PlainTextMimeType);

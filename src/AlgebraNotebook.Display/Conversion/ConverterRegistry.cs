@@ -91,6 +91,17 @@ internal static class ConverterRegistry
         AddGeneric(typeof(VectorField<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromVectorField)));
         AddGeneric(typeof(Coefficient<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromCoefficient)));
         AddGeneric(typeof(ConservationCheck<>), Method(typeof(OperatorDisplay), nameof(OperatorDisplay.FromConservationCheck)));
+
+        // Answers of checks and identifications, and weight systems (converters in Display/Lie).
+        AddExact<RealFormIdentification>(CheckDisplay.FromRealForm);
+        AddGeneric(typeof(AlgebraNotebook.Algebras.Enveloping.CentralityCheck<>), Method(typeof(CheckDisplay), nameof(CheckDisplay.FromCentralityCheck)));
+        AddGeneric(typeof(StructureConstantTable<>), Method(typeof(CheckDisplay), nameof(CheckDisplay.FromStructureConstantTable)));
+        AddGeneric(typeof(FunctionDerivatives<>), Method(typeof(CheckDisplay), nameof(CheckDisplay.FromFunctionDerivatives)));
+        AddExact<RealLogarithmVerdict>(CheckDisplay.FromRealLogarithmVerdict);
+        AddGeneric(typeof(RootDecomposition<>), Method(typeof(RootDecompositionDisplay), nameof(RootDecompositionDisplay.FromRootDecomposition)));
+        AddExact<WeightMultiplicity>(WeightSystemDisplay.FromWeightMultiplicity);
+        AddExact<WeightMultiplicity[]>(WeightSystemDisplay.FromWeightList);
+        AddExact<List<WeightMultiplicity>>(WeightSystemDisplay.FromWeightList);
     }
 
     private static MethodInfo Method(Type host, string name) =>
