@@ -15,6 +15,8 @@ public static class WireFormat
 
     private static readonly byte[] DelimiterBytes = Encoding.ASCII.GetBytes(Delimiter);
 
+    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
+
     /// <summary>Serializes and signs a message.</summary>
     /// <param name="message">The message.</param>
     /// <param name="signer">The signer holding the session key.</param>
@@ -109,8 +111,15 @@ public static class WireFormat
     {
         try
         {
-            return JsonNode.Parse(frame) as JsonObject
+            // The frames are UTF-8 JSON; invalid UTF-8 and duplicate property names are refused here, because the
+            // JsonObject would otherwise throw only when the field is first used.
+            var text = StrictUtf8.GetString(frame);
+            return JsonNode.Parse(text, documentOptions: new JsonDocumentOptions { AllowDuplicateProperties = false }) as JsonObject
                    ?? throw new FormatException($"the {name} frame is not a JSON object");
+        }
+        catch (DecoderFallbackException)
+        {
+            throw new FormatException($"the {name} frame is not valid UTF-8");
         }
         catch (JsonException e)
         {
