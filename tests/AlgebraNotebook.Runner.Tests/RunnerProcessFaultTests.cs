@@ -13,7 +13,8 @@ public class RunnerProcessFaultTests
 {
     private static readonly TimeSpan StartLimit = TimeSpan.FromSeconds(180);
 
-    private static Process StartRunner(params string[] args)
+    /// <summary>Starts the runner; its standard error is collected in the background into <paramref name="stderr"/>.</summary>
+    private static Process StartRunner(System.Text.StringBuilder stderr, params string[] args)
     {
         var dll = Path.Combine(AppContext.BaseDirectory, "algebra-notebook.dll");
         Assert.True(File.Exists(dll), $"The runner is not built beside the tests: {dll}");
@@ -30,15 +31,31 @@ public class RunnerProcessFaultTests
             start.ArgumentList.Add(a);
         }
 
-        return Process.Start(start) ?? throw new InvalidOperationException("The runner process did not start.");
+        var process = new Process { StartInfo = start };
+        process.ErrorDataReceived += (_, e) =>
+        {
+            lock (stderr)
+            {
+                stderr.AppendLine(e.Data);
+            }
+        };
+        process.OutputDataReceived += (_, _) => { };
+        Assert.True(process.Start(), "The runner process did not start.");
+        process.BeginErrorReadLine();
+        process.BeginOutputReadLine();
+        return process;
     }
 
-    private static void WaitFor(string file, Process process)
+    private static void WaitFor(string file, Process process, System.Text.StringBuilder stderr)
     {
         var watch = Stopwatch.StartNew();
         while (!File.Exists(file))
         {
-            Assert.False(process.HasExited, $"The runner ended before the slow cell started: {process.StandardError.ReadToEnd()}");
+            if (process.HasExited)
+            {
+                Assert.Fail($"The runner ended before the slow cell started: {stderr}");
+            }
+
             Assert.True(watch.Elapsed < StartLimit, "The slow cell did not start.");
             Thread.Sleep(100);
         }
@@ -56,8 +73,9 @@ public class RunnerProcessFaultTests
             ("code", $"System.IO.File.WriteAllText(\"{Escaped(started)}\", \"x\");\nSystem.Threading.Thread.Sleep(600000);", "csharp"));
         var before = File.ReadAllBytes(path);
 
-        using var runner = StartRunner("run", path, "--in-place", "--quiet");
-        WaitFor(started, runner);
+        var stderr = new System.Text.StringBuilder();
+        using var runner = StartRunner(stderr, "run", path, "--in-place", "--quiet");
+        WaitFor(started, runner, stderr);
         runner.Kill(entireProcessTree: true);
         runner.WaitForExit();
 
@@ -76,9 +94,9 @@ public class RunnerProcessFaultTests
                      + "await Task.Delay(600000, Microsoft.DotNet.Interactive.KernelInvocationContext.Current.CancellationToken);", "csharp"));
         var before = File.ReadAllBytes(path);
 
-        using var runner = StartRunner("run", path, "--in-place");
-        var stderr = runner.StandardError.ReadToEndAsync();
-        WaitFor(started, runner);
+        var stderr = new System.Text.StringBuilder();
+        using var runner = StartRunner(stderr, "run", path, "--in-place");
+        WaitFor(started, runner, stderr);
         var watch = Stopwatch.StartNew();
         using (var kill = Process.Start("kill", ["-INT", runner.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)]))
         {
@@ -88,9 +106,15 @@ public class RunnerProcessFaultTests
         // A liveness bound for a loaded test machine, not a speed target (the measured time is printed).
         Assert.True(runner.WaitForExit(TimeSpan.FromSeconds(60)), "The runner did not end after Ctrl+C.");
         watch.Stop();
+        runner.WaitForExit();
         Console.WriteLine($"Ctrl+C to exit: {watch.Elapsed.TotalSeconds:F2} s");
         Assert.Equal(RunnerApp.ExitInterrupted, runner.ExitCode);
-        var messages = stderr.Result;
+        string messages;
+        lock (stderr)
+        {
+            messages = stderr.ToString();
+        }
+
         Assert.Contains("Ctrl+C received", messages);
         Assert.Contains("interrupted; the running cell was asked to stop and no file was written or changed", messages);
         Assert.Equal(before, File.ReadAllBytes(path));

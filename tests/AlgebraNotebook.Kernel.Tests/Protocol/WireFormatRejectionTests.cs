@@ -46,6 +46,16 @@ public class WireFormatRejectionTests
         Assert.Equal("the header frame is not valid UTF-8", problem);
     }
 
+    [Theory]
+    [InlineData("""{"msg_id":"a","sessio\ud800n":"s1","msg_type":"kernel_info_request"}""")]
+    [InlineData("""{"msg_id":"a","msg_type":"execute_request","note":"\udc00"}""")]
+    public void A_string_escape_of_a_lone_surrogate_is_rejected_when_decoded(string header)
+    {
+        // Found: "\ud800" inside a property name threw InvalidOperationException on first use.
+        Assert.False(WireFormat.TryDecode(Frames(header), Signer, out _, out var problem));
+        Assert.Contains("lone surrogate", problem);
+    }
+
     [Fact]
     public void The_signature_must_be_the_lowercase_hex_digest_and_other_spellings_are_rejected()
     {
