@@ -203,14 +203,29 @@ public sealed partial class DifferentialOperator<T>
 
         private static double Size(DifferentialOperator<T> value)
         {
-            var largest = 1;
+            // Terms of the largest coefficient polynomial times its largest number in 64-bit words.
+            var largest = 1.0;
             foreach (var (_, coefficient) in value.Terms)
             {
-                largest = Math.Max(largest, coefficient.Polynomial.TermCount);
+                var words = 1.0;
+                foreach (var (_, number) in coefficient.Polynomial.Terms)
+                {
+                    words = Math.Max(words, 1 + Bits(number) / 64.0);
+                }
+
+                largest = Math.Max(largest, coefficient.Polynomial.TermCount * words);
             }
 
             return largest;
         }
+
+        private static long Bits(T number) => number switch
+        {
+            Rational r => r.Numerator.GetBitLength() + r.Denominator.GetBitLength(),
+            GaussianRational g => g.Real.Numerator.GetBitLength() + g.Real.Denominator.GetBitLength()
+                                  + g.Imaginary.Numerator.GetBitLength() + g.Imaginary.Denominator.GetBitLength(),
+            _ => 64,
+        };
 
         private DifferentialOperator<T> ParseAtom()
         {
