@@ -26,7 +26,15 @@ public sealed partial class DifferentialOperator<T>
 
     private sealed class OperatorParser(CoefficientRing<T> ring, string text)
     {
+        private const int MaxNesting = 200;
+
+        // Work budget of one parse: compositions and powers written in the text are charged (term products weighted
+        // by derivative order and coefficient size) so that a short text cannot ask for an expansion that runs for
+        // minutes. Operators built from parsed pieces with '*' and Pow have no such limit.
+        private const double MaxWork = 30_000;
         private int _pos;
+        private int _depth;
+        private double _work;
 
         public DifferentialOperator<T> ParseAll()
         {
@@ -89,7 +97,7 @@ public sealed partial class DifferentialOperator<T>
                 if (c == '*')
                 {
                     _pos++;
-                    result *= ParsePower();
+                    result = Compose(result, ParsePower());
                 }
                 else if (c == '/')
                 {
@@ -106,7 +114,7 @@ public sealed partial class DifferentialOperator<T>
                 }
                 else if (c is '(' || (c is not null && (char.IsLetterOrDigit(c.Value) || c == '.')))
                 {
-                    result *= ParsePower();
+                    result = Compose(result, ParsePower());
                 }
                 else
                 {
@@ -134,11 +142,90 @@ public sealed partial class DifferentialOperator<T>
                     throw new ExactParseException(text, start, "expected a non-negative integer exponent");
                 }
 
-                return atom.Pow(exponent);
+                // Powers by repeated squaring, each composition charged against the budget.
+                var power = Identity(ring);
+                var square = atom;
+                for (var n = exponent; n > 0; n >>= 1)
+                {
+                    if ((n & 1) == 1)
+                    {
+                        power = Compose(power, square);
+                    }
+
+                    if (n > 1)
+                    {
+                        square = Compose(square, square);
+                    }
+                }
+
+                return power;
             }
 
             return atom;
         }
+
+        private DifferentialOperator<T> Compose(DifferentialOperator<T> left, DifferentialOperator<T> right)
+        {
+            // The composition visits every sub-derivative of each left term (Leibniz's rule, prod(alpha_i + 1) of them,
+            // with binomial coefficients of about order bits) for every right term.
+            var leibniz = 0.0;
+            foreach (var (alpha, _) in left.Terms)
+            {
+                var count = 1.0;
+                foreach (var (_, exponent) in alpha.Factors)
+                {
+                    count *= exponent + 1.0;
+                }
+
+                leibniz += count * (1 + alpha.TotalDegree / 64.0);
+            }
+
+            var work = 1.0 + leibniz * right.Terms.Count * (Size(left) + Size(right));
+            _work += Math.Min(work, MaxWork + 1);
+            if (_work > MaxWork)
+            {
+                var shown = (text.Length > 200 ? text[..200] + "..." : text).Replace('\n', ' ').Replace('\r', ' ');
+                throw new BeyondCapabilityException(
+                    $"Cannot parse \"{shown}\" as an operator: the compositions and powers written in the text would take too long "
+                    + $"to expand (limit {MaxWork:N0} units of work per text). Build it from smaller parsed pieces with '*' and Pow "
+                    + "on the operator objects, which have no such limit.");
+            }
+
+            try
+            {
+                return left * right;
+            }
+            catch (OverflowException)
+            {
+                throw new ExactParseException(text, Math.Min(_pos, text.Length), $"the product makes a derivative order larger than {int.MaxValue}");
+            }
+        }
+
+        private static double Size(DifferentialOperator<T> value)
+        {
+            // Terms of the largest coefficient polynomial times its largest number in 64-bit words.
+            var largest = 1.0;
+            foreach (var (_, coefficient) in value.Terms)
+            {
+                var words = 1.0;
+                foreach (var (_, number) in coefficient.Polynomial.Terms)
+                {
+                    words = Math.Max(words, 1 + Bits(number) / 64.0);
+                }
+
+                largest = Math.Max(largest, coefficient.Polynomial.TermCount * words);
+            }
+
+            return largest;
+        }
+
+        private static long Bits(T number) => number switch
+        {
+            Rational r => r.Numerator.GetBitLength() + r.Denominator.GetBitLength(),
+            GaussianRational g => g.Real.Numerator.GetBitLength() + g.Real.Denominator.GetBitLength()
+                                  + g.Imaginary.Numerator.GetBitLength() + g.Imaginary.Denominator.GetBitLength(),
+            _ => 64,
+        };
 
         private DifferentialOperator<T> ParseAtom()
         {
@@ -146,8 +233,14 @@ public sealed partial class DifferentialOperator<T>
             var c = Peek() ?? throw new ExactParseException(text, _pos, "expected a number, symbol, derivative or '('");
             if (c == '(')
             {
+                if (++_depth > MaxNesting)
+                {
+                    throw new ExactParseException(text, _pos, $"parentheses nested deeper than {MaxNesting} levels");
+                }
+
                 _pos++;
                 var inner = ParseSum();
+                _depth--;
                 SkipSpaces();
                 if (Peek() != ')')
                 {
@@ -166,7 +259,15 @@ public sealed partial class DifferentialOperator<T>
                     _pos++;
                 }
 
-                var number = Rational.Parse(text[start.._pos]);
+                Rational number;
+                try
+                {
+                    number = Rational.Parse(text[start.._pos]);
+                }
+                catch (ExactParseException inner)
+                {
+                    throw new ExactParseException(text, start + inner.Position, inner.Problem);
+                }
                 return Constant(T.FromRational(number));
             }
 

@@ -92,7 +92,10 @@ public sealed partial class CartanType
         var problem = SimpleCartanType.RankProblem(family, rank);
         if (problem is not null)
         {
-            var prefix = parts(text) > 1 ? $"Cartan type \"{text}\": " : string.Empty;
+            // The problem names the component as normalised ("F0" for "F_0"); quote the text as typed when it differs.
+            var prefix = parts(text) > 1 || !problem.StartsWith(text.Trim(), StringComparison.Ordinal)
+                ? $"Cartan type \"{text}\": "
+                : string.Empty;
             throw new ExactArgumentException(prefix + problem, nameof(text));
         }
 

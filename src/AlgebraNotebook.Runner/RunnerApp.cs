@@ -6,7 +6,7 @@ namespace AlgebraNotebook.Runner;
 /// <summary>
 /// The algebra-notebook command line, callable in-process: <c>run</c>, <c>check</c>, <c>export</c> and <c>--help</c>
 /// (see <see cref="HelpText"/>). Exit codes: <see cref="ExitSuccess"/>, <see cref="ExitCellFailed"/> (also
-/// <see cref="ExitOutputsDiffer"/>), <see cref="ExitUsageError"/>.
+/// <see cref="ExitOutputsDiffer"/>), <see cref="ExitUsageError"/>, <see cref="ExitInterrupted"/>.
 /// </summary>
 public static partial class RunnerApp
 {
@@ -22,6 +22,9 @@ public static partial class RunnerApp
     /// <summary>Exit code for a usage error, an unreadable or malformed notebook, a notebook without stored outputs
     /// (check, export), or a file that could not be written.</summary>
     public const int ExitUsageError = 2;
+
+    /// <summary>Exit code when the run was cancelled (Ctrl+C): 128 + SIGINT, as shells report it. Nothing was written.</summary>
+    public const int ExitInterrupted = 130;
 
     /// <summary>The text printed by <c>--help</c>.</summary>
     public const string HelpText = """
@@ -73,14 +76,16 @@ public static partial class RunnerApp
 
         Exit codes: 0 success (all cells succeeded, outputs reproduce, export written);
         1 run: at least one cell failed, check: at least one cell's outputs differ;
-        2 usage error, unreadable notebook, or (check, export) a notebook without stored outputs.
+        2 usage error, unreadable notebook, or (check, export) a notebook without stored outputs;
+        130 interrupted with Ctrl+C (the running cell is asked to stop; nothing is written).
         """;
 
     /// <summary>Parses <paramref name="args"/>, runs the command and returns the process exit code.</summary>
     /// <param name="args">Command-line arguments (without the program name).</param>
     /// <param name="stdout">Receives output paths, check results and help text.</param>
     /// <param name="stderr">Receives usage errors, load errors, progress lines and "cell N: message" lines.</param>
-    /// <param name="cancellationToken">Stops a run between cells.</param>
+    /// <param name="cancellationToken">Cancels the run: the running cell is asked to stop, nothing is written, and the
+    /// result is <see cref="ExitInterrupted"/>.</param>
     /// <returns>0, 1 or 2 as documented on <see cref="RunnerApp"/>.</returns>
     public static async Task<int> RunAsync(string[] args, TextWriter stdout, TextWriter stderr,
         CancellationToken cancellationToken = default)
@@ -107,13 +112,23 @@ public static partial class RunnerApp
             return ExitSuccess;
         }
 
-        return args[0] switch
+        try
         {
-            "run" => await RunCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
-            "check" => await CheckCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
-            "export" => await ExportCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
-            _ => await UsageError(stderr, $"algebra-notebook: unknown command '{args[0]}'. Try 'algebra-notebook --help'.").ConfigureAwait(false),
-        };
+            return args[0] switch
+            {
+                "run" => await RunCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
+                "check" => await CheckCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
+                "export" => await ExportCommandAsync(args, stdout, stderr, cancellationToken).ConfigureAwait(false),
+                _ => await UsageError(stderr, $"algebra-notebook: unknown command '{args[0]}'. Try 'algebra-notebook --help'.").ConfigureAwait(false),
+            };
+        }
+        catch (OperationCanceledException) when (cancellationToken.IsCancellationRequested)
+        {
+            await stderr.WriteLineAsync(
+                $"algebra-notebook {args[0]}: interrupted; the running cell was asked to stop and no file was written or changed.")
+                .ConfigureAwait(false);
+            return ExitInterrupted;
+        }
     }
 
     /// <summary>The default report path: the notebook's path with its extension replaced by .html.</summary>

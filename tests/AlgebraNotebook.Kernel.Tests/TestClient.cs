@@ -90,6 +90,21 @@ internal sealed class TestClient : IDisposable
         return id;
     }
 
+    /// <summary>
+    /// Sends a request whose header, parent, metadata and content frames are given as raw bytes (for malformed
+    /// messages); signed with the session key unless <paramref name="signature"/> is given.
+    /// </summary>
+    public void SendFrames(string channel, byte[] header, byte[] content, string? signature = null)
+    {
+        var frames = new[] { header, "{}"u8.ToArray(), "{}"u8.ToArray(), content };
+        var message = new List<byte[]> { Delimiter, Encoding.ASCII.GetBytes(signature ?? Sign(key, frames)) };
+        message.AddRange(frames);
+        Socket(channel).SendMultipartBytes(message);
+    }
+
+    /// <summary>The hexadecimal HMAC-SHA256 the session key gives for the four frames.</summary>
+    public string SignatureOf(byte[] header, byte[] content) => Sign(key, new[] { header, "{}"u8.ToArray(), "{}"u8.ToArray(), content });
+
     /// <summary>The reply to a request on its channel, or null if none came within the timeout.</summary>
     public Received? ReceiveReply(string channel, string requestId, TimeSpan timeout)
     {

@@ -13,15 +13,26 @@ namespace AlgebraNotebook.Exact.Polynomials;
 /// primary := number | name | '(' sum ')'                      name "i" is the imaginary unit for GaussianRational
 /// </code>
 /// Juxtaposition multiplies ("3x", "2 hbar t", "(x+1)(x-1)"); a number may not follow another factor without '*'.
+/// Products and powers written in the text are charged against a work budget (<see cref="MaxWork"/>, counted as
+/// term products weighted by coefficient size) so that a short text cannot ask for an expansion that runs for minutes;
+/// over the budget the parser throws <see cref="BeyondCapabilityException"/> and the same product can still be built
+/// with <see cref="Polynomial{T}.Pow(int)"/> and '*' on polynomial objects, which have no such limit.
 /// </summary>
 internal sealed class PolynomialParser<T>
     where T : IFieldElement<T>
 {
     private const int MaxNesting = 200;
 
+    /// <summary>Work budget of one parse: the sum over products of (terms x terms x coefficient words).</summary>
+    private const long MaxWork = 100_000;
+
+    /// <summary>Largest coefficient, in bits, that a power written in the text may produce.</summary>
+    private const long MaxPowerBits = 1 << 20;
+
     private readonly string _text;
     private int _position;
     private int _depth;
+    private long _work;
 
     private PolynomialParser(string text)
     {
@@ -128,7 +139,8 @@ internal sealed class PolynomialParser<T>
                     throw new ExactParseException(_text, _position, "'**' is not an operator; write '^' for powers, e.g. x^2");
                 }
 
-                result *= ParseFactor();
+                var factor = ParseFactor();
+                result = Multiply(result, factor);
             }
             else if (c == '/')
             {
@@ -156,7 +168,8 @@ internal sealed class PolynomialParser<T>
             }
             else if (char.IsLetter(c) || c == '(')
             {
-                result *= ParseFactor();
+                var factor = ParseFactor();
+                result = Multiply(result, factor);
             }
             else if (char.IsAsciiDigit(c) || c == '.')
             {
@@ -210,7 +223,105 @@ internal sealed class PolynomialParser<T>
         }
 
         _position = after;
-        return primary.Pow(exponent);
+        ChargePower(primary, exponent);
+        try
+        {
+            return primary.Pow(exponent);
+        }
+        catch (OverflowException)
+        {
+            throw new ExactParseException(_text, after, $"the power ^{exponent} makes an exponent larger than {int.MaxValue}");
+        }
+    }
+
+    private Polynomial<T> Multiply(Polynomial<T> left, Polynomial<T> right)
+    {
+        Charge((double)left.TermCount * right.TermCount * (2 + (Bits(left) + Bits(right)) / 64.0));
+        try
+        {
+            return left * right;
+        }
+        catch (OverflowException)
+        {
+            throw new ExactParseException(_text, _position, $"the product makes an exponent larger than {int.MaxValue}");
+        }
+    }
+
+    private void ChargePower(Polynomial<T> primary, int exponent)
+    {
+        if (exponent <= 1 || primary.IsZero)
+        {
+            return;
+        }
+
+        // Bits beyond those of the coefficient 1 (numerator 1, denominator 1), so powers of x or -x cost nothing.
+        var bits = Math.Max(0, Bits(primary) - 2);
+        var growth = primary.TermCount == 1 ? bits : bits + Math.Log2(primary.TermCount) + 1;
+        var resultBits = exponent * growth;
+        if (resultBits > MaxPowerBits)
+        {
+            throw Beyond($"the power ^{exponent} would make coefficients of about {resultBits:G3} bits (at most {MaxPowerBits:N0} allowed)");
+        }
+
+        if (primary.TermCount == 1)
+        {
+            Charge(resultBits / 64);
+            return;
+        }
+
+        // The expansion has at most C(e + t - 1, t - 1) terms; squaring costs about terms^2 coefficient products.
+        var terms = Math.Min(1e18, Binomial(exponent + primary.TermCount - 1, primary.TermCount - 1));
+        Charge(terms * terms * (1 + resultBits / 64) / 2);
+    }
+
+    private void Charge(double work)
+    {
+        _work += (long)Math.Min(work, MaxWork + 1.0);
+        if (_work > MaxWork)
+        {
+            throw Beyond("the products and powers written in the text would take too long to expand");
+        }
+    }
+
+    private BeyondCapabilityException Beyond(string problem) => new(
+        $"Cannot parse \"{Shorten(_text)}\" as a polynomial: {problem} (limit {MaxWork:N0} units of work per text). "
+        + "Build it from smaller parsed pieces with Pow and '*' on the polynomial objects, which have no such limit.");
+
+    private static string Shorten(string text) => (text.Length > 200 ? text[..200] + "..." : text).Replace('\n', ' ').Replace('\r', ' ');
+
+    private static double Binomial(int n, int k)
+    {
+        var result = 1.0;
+        for (var j = 1; j <= k && result < 1e18; j++)
+        {
+            result = result * (n - k + j) / j;
+        }
+
+        return result;
+    }
+
+    /// <summary>The largest coefficient of the polynomial in bits (numerator plus denominator, all rational parts).</summary>
+    private static long Bits(Polynomial<T> polynomial)
+    {
+        long largest = 2;
+        foreach (var (_, coefficient) in polynomial.Terms)
+        {
+            var parts = CoefficientSupport<T>.RationalParts(coefficient);
+            if (parts is null)
+            {
+                return largest;
+            }
+
+            long bits = 0;
+            foreach (var part in parts)
+            {
+                bits += part.Numerator.GetBitLength() + part.Denominator.GetBitLength();
+            }
+
+            largest = Math.Max(largest, bits);
+        }
+
+        return largest;
     }
 
     private int ParseExponent()

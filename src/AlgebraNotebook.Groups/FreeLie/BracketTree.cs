@@ -82,10 +82,12 @@ public sealed class BracketTree
         reader.SkipSpaces();
         if (reader.TryConsume('['))
         {
+            reader.Enter();
             var left = ParseTree(reader);
             reader.Expect(',', "expected ',' between the two arguments of a bracket");
             var right = ParseTree(reader);
             reader.Expect(']', "expected ']' to close the bracket");
+            reader.Leave();
             return Bracket(left, right);
         }
 

@@ -1,3 +1,4 @@
+using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Parsing;
 using AlgebraNotebook.Exact.Scalars;
 
@@ -94,19 +95,36 @@ public sealed partial class FreeLieAlgebra
     private LieSeries ParseAtom(LieTextReader reader)
     {
         reader.SkipSpaces();
+        var open = reader.Position;
         if (reader.TryConsume('['))
         {
+            reader.Enter();
             var left = ParseSum(reader);
             reader.Expect(',', "expected ',' between the two arguments of a bracket");
             var right = ParseSum(reader);
             reader.Expect(']', "expected ']' to close the bracket");
-            return LieSeries.Bracket(left, right);
+            reader.Leave();
+            // Work budget of one parse: a bracket expands both sides in the free associative algebra, up to
+            // 2^degree words, so text asking for many high-degree brackets is refused before it runs for minutes.
+            var degree = Math.Max(0, left.MaxDegree) + Math.Max(0, right.MaxDegree);
+            reader.Charge((double)left.Terms.Count * right.Terms.Count * Math.Pow(2, Math.Min(degree, 60)), open);
+            try
+            {
+                return LieSeries.Bracket(left, right);
+            }
+            catch (ExactArgumentException e)
+            {
+                // The degree limit of the series, reported against the bracket that reaches it.
+                throw reader.ErrorAt(open, e.Message.Split(" (Parameter", 2)[0]);
+            }
         }
 
         if (reader.TryConsume('('))
         {
+            reader.Enter();
             var inner = ParseSum(reader);
             reader.Expect(')', "expected ')'");
+            reader.Leave();
             return inner;
         }
 

@@ -1,3 +1,4 @@
+using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Parsing;
 
 namespace AlgebraNotebook.Groups.FreeLie;
@@ -57,6 +58,45 @@ internal sealed class LieTextReader(string text)
 
         return Text[start..Position];
     }
+
+    /// <summary>Brackets and parentheses may nest this deep; deeper text is refused instead of exhausting the stack.</summary>
+    public const int MaxNesting = 200;
+
+    private int depth;
+
+    /// <summary>Enters one more level of nesting; throws when the text nests deeper than <see cref="MaxNesting"/>.</summary>
+    public void Enter()
+    {
+        if (++depth > MaxNesting)
+        {
+            throw Error($"nesting deeper than {MaxNesting} levels");
+        }
+    }
+
+    /// <summary>Work budget of one parse (see <see cref="Charge"/>).</summary>
+    public const double MaxWork = 1 << 22;
+
+    private double work;
+
+    /// <summary>
+    /// Charges work against the budget; throws <see cref="BeyondCapabilityException"/> naming the text when the
+    /// budget is spent. The same element can still be built with the series API, which has no such limit.
+    /// </summary>
+    public void Charge(double amount, int position)
+    {
+        work += Math.Min(amount, MaxWork + 1);
+        if (work > MaxWork)
+        {
+            var shown = (Text.Length > 200 ? Text[..200] + "..." : Text).Replace('\n', ' ').Replace('\r', ' ');
+            throw new BeyondCapabilityException(
+                $"Cannot parse \"{shown}\": the brackets up to position {position + 1} would take too long to expand "
+                + $"(limit {MaxWork:N0} units of work per text, about 2^degree per bracket). Build the element with "
+                + "LieSeries.Bracket on parsed pieces, which has no such limit.");
+        }
+    }
+
+    /// <summary>Leaves a level entered with <see cref="Enter"/>.</summary>
+    public void Leave() => depth--;
 
     public ExactParseException Error(string problem) => new(Text, Position, problem);
 

@@ -65,6 +65,11 @@ public sealed record ConnectionInfo(
         {
             throw new FormatException($"The connection file '{source}' is not valid JSON: {e.Message}", e);
         }
+        catch (ArgumentException e)
+        {
+            // A string holding a lone UTF-16 surrogate cannot be read as JSON text.
+            throw new FormatException($"The connection file '{source}' is not valid JSON: {e.Message}", e);
+        }
 
         using (document)
         {

@@ -24,11 +24,11 @@ public sealed record JupyterMessage(
     /// <summary>The messaging protocol version this kernel speaks.</summary>
     public const string ProtocolVersion = "5.3";
 
-    /// <summary>The msg_type field of the header, or the empty string when absent.</summary>
-    public string MessageType => Header["msg_type"]?.GetValue<string>() ?? string.Empty;
+    /// <summary>The msg_type field of the header, or the empty string when absent or not a string.</summary>
+    public string MessageType => TextField(Header, "msg_type");
 
-    /// <summary>The msg_id field of the header, or the empty string when absent.</summary>
-    public string MessageId => Header["msg_id"]?.GetValue<string>() ?? string.Empty;
+    /// <summary>The msg_id field of the header, or the empty string when absent or not a string.</summary>
+    public string MessageId => TextField(Header, "msg_id");
 
     /// <summary>Creates a message of the given type with a fresh header.</summary>
     /// <param name="messageType">The msg_type, for example "execute_reply".</param>
@@ -55,4 +55,7 @@ public sealed record JupyterMessage(
         return new JupyterMessage(parent?.Identities ?? Array.Empty<byte[]>(), header, parentHeader, new JsonObject(), content,
             Array.Empty<byte[]>());
     }
+
+    private static string TextField(JsonObject header, string name) =>
+        header[name] is JsonValue value && value.TryGetValue<string>(out var text) ? text : string.Empty;
 }

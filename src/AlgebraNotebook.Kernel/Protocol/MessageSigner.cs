@@ -8,7 +8,7 @@ namespace AlgebraNotebook.Kernel.Protocol;
 /// that order, as sent), written as lowercase hexadecimal.
 /// </summary>
 /// <remarks>
-/// Verification decodes the received hexadecimal and compares the digests with
+/// Verification compares the received text with the expected lowercase hexadecimal digest using
 /// <see cref="CryptographicOperations.FixedTimeEquals"/>, so the time taken does not reveal how many leading bytes
 /// matched. With an empty key signing is disabled (the messaging standard's rule): the signature frame is empty and
 /// every message verifies.
@@ -59,17 +59,10 @@ public sealed class MessageSigner
             return true;
         }
 
-        byte[] received;
-        try
-        {
-            received = Convert.FromHexString(signature);
-        }
-        catch (FormatException)
-        {
-            return false;
-        }
-
-        var expected = Digest(header, parentHeader, metadata, content);
+        // The signature is the lowercase hexadecimal HMAC digest, as the reference client writes it; the received
+        // text is compared with the expected text byte for byte in constant time (any other spelling is rejected).
+        var expected = Encoding.ASCII.GetBytes(Convert.ToHexStringLower(Digest(header, parentHeader, metadata, content)));
+        var received = Encoding.UTF8.GetBytes(signature);
         // FixedTimeEquals returns false at once for different lengths; the length of a digest is public anyway.
         return CryptographicOperations.FixedTimeEquals(received, expected);
     }

@@ -15,6 +15,8 @@ public static class WireFormat
 
     private static readonly byte[] DelimiterBytes = Encoding.ASCII.GetBytes(Delimiter);
 
+    private static readonly UTF8Encoding StrictUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
+
     /// <summary>Serializes and signs a message.</summary>
     /// <param name="message">The message.</param>
     /// <param name="signer">The signer holding the session key.</param>
@@ -105,12 +107,51 @@ public static class WireFormat
 
     private static byte[] Serialize(JsonObject value) => Encoding.UTF8.GetBytes(value.ToJsonString());
 
+    /// <summary>Reads every property name and string value once, so that undecodable text fails here and not later.</summary>
+    private static void ReadEveryString(JsonNode? node)
+    {
+        switch (node)
+        {
+            case JsonObject obj:
+                foreach (var (_, value) in obj)
+                {
+                    ReadEveryString(value);
+                }
+
+                break;
+            case JsonArray array:
+                foreach (var item in array)
+                {
+                    ReadEveryString(item);
+                }
+
+                break;
+            case JsonValue value when value.GetValueKind() == JsonValueKind.String:
+                _ = value.GetValue<string>();
+                break;
+        }
+    }
+
     private static JsonObject ParseObject(byte[] frame, string name)
     {
         try
         {
-            return JsonNode.Parse(frame) as JsonObject
-                   ?? throw new FormatException($"the {name} frame is not a JSON object");
+            // The frames are UTF-8 JSON; invalid UTF-8 and duplicate property names are refused here, because the
+            // JsonObject would otherwise throw only when the field is first used.
+            var text = StrictUtf8.GetString(frame);
+            var parsed = JsonNode.Parse(text, documentOptions: new JsonDocumentOptions { AllowDuplicateProperties = false }) as JsonObject
+                         ?? throw new FormatException($"the {name} frame is not a JSON object");
+            ReadEveryString(parsed);
+            return parsed;
+        }
+        catch (InvalidOperationException)
+        {
+            // An escaped lone surrogate ("\ud800") is valid JSON syntax but not text; reading it throws.
+            throw new FormatException($"the {name} frame holds a string escape that is not valid text (a lone surrogate)");
+        }
+        catch (DecoderFallbackException)
+        {
+            throw new FormatException($"the {name} frame is not valid UTF-8");
         }
         catch (JsonException e)
         {

@@ -99,6 +99,11 @@ public static class NotebookFile
             throw new NotebookLoadException(path,
                 $"Notebook '{path}' is not valid JSON (line {line}, position {position}): {FirstSentence(e.Message)}", e);
         }
+        catch (ArgumentException e)
+        {
+            // A lone UTF-16 surrogate in the text (possible through this API, never from a file read as UTF-8).
+            throw new NotebookLoadException(path, $"Notebook '{path}' is not valid JSON text: {e.Message}", e);
+        }
 
         InteractiveDocument parsed;
         try

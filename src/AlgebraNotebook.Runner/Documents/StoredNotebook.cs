@@ -81,13 +81,18 @@ public sealed class StoredNotebook
         JsonNode? root;
         try
         {
-            root = JsonNode.Parse(json);
+            root = JsonNode.Parse(json, documentOptions: new JsonDocumentOptions { AllowDuplicateProperties = false });
         }
         catch (JsonException e)
         {
             var line = e.LineNumber is long l ? (l + 1).ToString() : "?";
             var position = e.BytePositionInLine is long p ? (p + 1).ToString() : "?";
             throw new NotebookLoadException(path, $"Notebook '{path}' is not valid JSON (line {line}, position {position}).", e);
+        }
+        catch (ArgumentException e)
+        {
+            // A lone UTF-16 surrogate in the text (possible through this API, never from a file read as UTF-8).
+            throw new NotebookLoadException(path, $"Notebook '{path}' is not valid JSON text: {e.Message}", e);
         }
 
         if (root is not JsonObject rootObject || rootObject["cells"] is not JsonArray cellArray)

@@ -29,9 +29,10 @@ public sealed class NotebookExecutor : IDisposable
 
     /// <summary>Creates the kernel (about one second) and registers the formatters; nothing is executed yet.</summary>
     /// <param name="cellTimeout">
-    /// Longest time one code cell may run; null (the default) waits without limit. A cell that exceeds it is reported
-    /// as failed, and because an in-process kernel cannot abort running code, every later code cell is reported as not
-    /// run. The abandoned cell keeps its thread until the process ends.
+    /// Longest time one code cell may run; null (the default) waits without limit. A cell that exceeds it is asked to
+    /// stop (the kernel's cancellation token, <c>KernelInvocationContext.Current.CancellationToken</c>, is cancelled)
+    /// and reported as failed; because an in-process kernel cannot abort code that ignores the token, every later code
+    /// cell is reported as not run. Code that ignores the token keeps its thread until the process ends.
     /// </param>
     /// <exception cref="ArgumentOutOfRangeException"><paramref name="cellTimeout"/> is zero or negative.</exception>
     public NotebookExecutor(TimeSpan? cellTimeout = null)
@@ -64,9 +65,11 @@ public sealed class NotebookExecutor : IDisposable
     /// </summary>
     /// <param name="cells">The notebook cells in document order.</param>
     /// <param name="progress">Called before and after each C# code cell; null for no reports.</param>
-    /// <param name="cancellationToken">Stops before the next cell when cancelled.</param>
+    /// <param name="cancellationToken">When cancelled, the running cell is asked to stop (as for the time limit) and
+    /// the run ends with <see cref="OperationCanceledException"/>.</param>
     /// <returns>The results, in the same order as <paramref name="cells"/>.</returns>
     /// <exception cref="InvalidOperationException">The prelude of using directives failed to compile (a build problem, not a notebook problem).</exception>
+    /// <exception cref="OperationCanceledException"><paramref name="cancellationToken"/> was cancelled.</exception>
     public async Task<IReadOnlyList<CellResult>> RunAsync(IReadOnlyList<NotebookCell> cells, Action<CellProgress>? progress,
         CancellationToken cancellationToken = default)
     {
@@ -90,7 +93,7 @@ public sealed class NotebookExecutor : IDisposable
             position++;
             progress?.Invoke(new CellProgress(position, total, cell, null, TimeSpan.Zero));
             var watch = System.Diagnostics.Stopwatch.StartNew();
-            var result = await RunCodeCellAsync(cell).ConfigureAwait(false);
+            var result = await RunCodeCellAsync(cell, cancellationToken).ConfigureAwait(false);
             watch.Stop();
             progress?.Invoke(new CellProgress(position, total, cell, result, watch.Elapsed));
             results.Add(result);
@@ -126,7 +129,7 @@ public sealed class NotebookExecutor : IDisposable
         prepared = true;
     }
 
-    private async Task<CellResult> RunCodeCellAsync(NotebookCell cell)
+    private async Task<CellResult> RunCodeCellAsync(NotebookCell cell, CancellationToken cancellationToken)
     {
         if (string.IsNullOrWhiteSpace(cell.Source))
         {
@@ -140,12 +143,25 @@ public sealed class NotebookExecutor : IDisposable
         }
 
         var submission = kernel.SendAsync(new SubmitCode(cell.Source));
-        if (cellTimeout is { } limit
-            && await Task.WhenAny(submission, Task.Delay(limit)).ConfigureAwait(false) != submission)
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
+        if (cellTimeout is { } limit)
         {
-            stuckCell = cell.Number;
-            return new CellResult(cell, Array.Empty<CellOutput>(),
-                $"The cell did not finish within the time limit of {limit.TotalSeconds.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} s.");
+            stop.CancelAfter(limit);
+        }
+
+        var stopped = new TaskCompletionSource(TaskCreationOptions.RunContinuationsAsynchronously);
+        await using (stop.Token.Register(() => stopped.TrySetResult()).ConfigureAwait(false))
+        {
+            if (await Task.WhenAny(submission, stopped.Task).ConfigureAwait(false) != submission)
+            {
+                // Ask the cell to stop: .NET Interactive's Cancel command cancels the invocation's cancellation token.
+                // Code that ignores the token keeps running, so the kernel is treated as occupied from here on.
+                stuckCell = cell.Number;
+                _ = kernel.SendAsync(new Cancel());
+                cancellationToken.ThrowIfCancellationRequested();
+                return new CellResult(cell, Array.Empty<CellOutput>(),
+                    $"The cell did not finish within the time limit of {cellTimeout!.Value.TotalSeconds.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} s.");
+            }
         }
 
         var result = await submission.ConfigureAwait(false);

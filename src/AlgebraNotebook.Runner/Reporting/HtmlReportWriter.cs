@@ -12,15 +12,22 @@ namespace AlgebraNotebook.Runner.Reporting;
 /// number and the compiler diagnostics or exception message.
 /// </summary>
 /// <remarks>
-/// The report opens offline: the only style is the inline stylesheet below, nothing is loaded from a network and a
-/// Content-Security-Policy forbids external resources (inline scripts are allowed: charts are drawn by them). Plain text
-/// (sources, standard output, plain-text values, failure messages) is always HTML-escaped; text/html outputs are
-/// formatter output and embedded as they are (MathML renders natively in current browsers). When an output holds a
-/// chart, the report carries exactly one copy of the chart library (<see cref="ChartLibrary"/>) in its head: copies that
-/// outputs brought along are removed.
+/// The report opens offline: the only style is the inline stylesheet below, nothing is loaded from a network and the
+/// <see cref="ContentSecurityPolicy"/> meta tag blocks every network load (inline scripts and styles, data: images and
+/// fonts only; inline scripts are allowed because charts are drawn by them). Plain text (sources, standard output,
+/// plain-text values, failure messages) is always HTML-escaped; text/html outputs are formatter output and embedded as
+/// they are (MathML renders natively in current browsers). When an output holds a chart, the report carries exactly one
+/// copy of the chart library (<see cref="ChartLibrary"/>) in its head: copies that outputs brought along are removed.
 /// </remarks>
 public static class HtmlReportWriter
 {
+    /// <summary>
+    /// The Content-Security-Policy of every report (a meta tag in its head): nothing may be fetched from anywhere;
+    /// inline scripts and styles, and images and fonts written as data: URLs, are the only content allowed.
+    /// </summary>
+    public const string ContentSecurityPolicy =
+        "default-src 'none'; script-src 'unsafe-inline'; style-src 'unsafe-inline'; img-src data:; font-src data:";
+
     private const string Stylesheet = """
         :root { color-scheme: light; }
         body { margin: 0; background: #f4f3ef; color: #1d1f21; font: 16px/1.5 system-ui, sans-serif; }
@@ -71,8 +78,7 @@ public static class HtmlReportWriter
         var hasCharts = results.Any(r => r.Outputs.Any(o => o.IsHtml && ChartLibrary.ContainsChart(o.Content)));
         var html = new StringBuilder();
         html.Append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
-            .Append("<meta http-equiv=\"Content-Security-Policy\" content=\"")
-            .Append("default-src 'none'; script-src 'unsafe-inline'; style-src 'unsafe-inline'; img-src data:; font-src data:\">\n")
+            .Append($"<meta http-equiv=\"Content-Security-Policy\" content=\"{ContentSecurityPolicy}\">\n")
             .Append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
             .Append("<title>").Append(HtmlText.Escape(title)).Append("</title>\n")
             .Append("<style>\n").Append(Stylesheet).Append("\n</style>\n");

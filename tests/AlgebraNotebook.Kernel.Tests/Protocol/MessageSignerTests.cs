@@ -18,13 +18,14 @@ public class MessageSignerTests
     }
 
     [Fact]
-    public void Verification_accepts_the_right_signature_in_either_case_and_rejects_others()
+    public void Verification_accepts_the_lowercase_digest_and_rejects_every_other_spelling()
     {
         var signer = new MessageSigner("Jefe");
         var parts = new[] { "what do ", "ya want ", "for ", "nothing?" }.Select(Encoding.ASCII.GetBytes).ToArray();
 
         Assert.True(signer.Verify(Rfc4231Case2, parts[0], parts[1], parts[2], parts[3]));
-        Assert.True(signer.Verify(Rfc4231Case2.ToUpperInvariant(), parts[0], parts[1], parts[2], parts[3]));
+        // The reference client compares the lowercase hexdigest text (Jupyter messaging specification, "The Wire Protocol").
+        Assert.False(signer.Verify(Rfc4231Case2.ToUpperInvariant(), parts[0], parts[1], parts[2], parts[3]));
         Assert.False(signer.Verify(string.Empty, parts[0], parts[1], parts[2], parts[3]));
         Assert.False(signer.Verify("not hex", parts[0], parts[1], parts[2], parts[3]));
         Assert.False(signer.Verify(Rfc4231Case2[..62], parts[0], parts[1], parts[2], parts[3]));

@@ -1,0 +1,89 @@
+using AlgebraNotebook.Exact;
+using AlgebraNotebook.Exact.Parsing;
+using AlgebraNotebook.Exact.Polynomials;
+using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.Groups.FreeLie;
+using AlgebraNotebook.Operators;
+
+namespace AlgebraNotebook.Fuzz.Tests;
+
+/// <summary>
+/// Inputs the fuzzer found (seed 20261202) that crashed or ran for minutes before the fix, kept as regression cases,
+/// plus the nesting limits added with them. Each must now be refused the documented way, naming the text.
+/// </summary>
+public class FoundInputsTests
+{
+    private static readonly CoefficientRing<GaussianRational> Ring =
+        new CoefficientRingBuilder<GaussianRational>("found inputs (x, y, z)").Coordinates("x", "y", "z").Build();
+
+    [Fact]
+    public void A_long_product_of_binomials_is_refused_instead_of_expanding_for_minutes()
+    {
+        // Found: 400 juxtaposed factors "(x+1)(x-1)" ran for more than 60 s (polynomial-rational input 70).
+        var text = string.Concat(Enumerable.Repeat("(x+1)(x-1)\n", 400));
+        var e = Assert.Throws<BeyondCapabilityException>(() => Polynomial<Rational>.Parse(text));
+        Assert.Contains("(x+1)(x-1)", e.Message);
+        Assert.Contains("Pow", e.Message);
+    }
+
+    [Fact]
+    public void Short_products_and_powers_still_parse_and_expand_exactly()
+    {
+        // (x + 1)^10 has the binomial coefficients C(10, k) (common practice); 252 = C(10, 5).
+        var p = Polynomial<Rational>.Parse("(x + 1)^10");
+        Assert.Equal(11, p.TermCount);
+        Assert.Equal(Polynomial<Rational>.Parse("252 x^5"), Polynomial<Rational>.FromTerms(p.Terms.Where(t => t.Monomial.TotalDegree == 5)));
+        Assert.Equal(1, Polynomial<Rational>.Parse("x^1000000").TermCount);
+    }
+
+    [Fact]
+    public void An_exponent_past_the_integer_range_is_a_parse_error_not_an_overflow()
+    {
+        var e = Assert.Throws<ExactParseException>(() => Polynomial<Rational>.Parse("x^2000000000 * x^2000000000"));
+        Assert.Contains("larger than", e.Problem);
+    }
+
+    [Fact]
+    public void A_huge_power_of_a_derivative_is_refused_instead_of_running_for_minutes()
+    {
+        // Found: "d_x^222222 " ran for more than 60 s (differential-operator input 1100).
+        var e = Assert.Throws<BeyondCapabilityException>(() => DifferentialOperator<GaussianRational>.Parse(Ring, "d_x^222222 "));
+        Assert.Contains("d_x^222222", e.Message);
+        Assert.Equal(DifferentialOperator<GaussianRational>.Parse(Ring, "d_x*d_x*d_x"), DifferentialOperator<GaussianRational>.Parse(Ring, "d_x^3"));
+    }
+
+    [Fact]
+    public void Deeply_nested_parentheses_in_operator_text_are_refused_before_the_stack_runs_out()
+    {
+        var text = new string('(', 5000) + "x" + new string(')', 5000);
+        var e = Assert.Throws<ExactParseException>(() => DifferentialOperator<GaussianRational>.Parse(Ring, text));
+        Assert.Contains("nested deeper than 200", e.Problem);
+    }
+
+    [Fact]
+    public void Deeply_nested_brackets_are_refused_before_the_stack_runs_out()
+    {
+        var text = string.Concat(Enumerable.Repeat("[X, ", 5000)) + "Y" + new string(']', 5000);
+        Assert.Contains("nesting deeper than 200", Assert.Throws<ExactParseException>(() => BracketTree.Parse(text)).Problem);
+        Assert.Contains("nesting deeper than 200", Assert.Throws<ExactParseException>(() => new FreeLieAlgebra("X", "Y").Parse(text)).Problem);
+    }
+
+    [Fact]
+    public void A_bracket_beyond_the_degree_limit_is_a_parse_error_pointing_at_the_bracket()
+    {
+        // Found: the degree-limit message named no input (free-lie-expression input 1).
+        var text = string.Concat(Enumerable.Repeat("[X, ", 40)) + "Y" + new string(']', 40);
+        var e = Assert.ThrowsAny<Exception>(() => new FreeLieAlgebra("X", "Y").Parse(text));
+        Assert.True(e is ExactParseException or BeyondCapabilityException, e.GetType().Name);
+        Assert.Contains("[X, [X, ", e.Message);
+    }
+
+    [Fact]
+    public void A_huge_power_of_a_number_in_operator_text_is_refused_instead_of_running_for_minutes()
+    {
+        // Found: "x*y*5.0^339244341d_y" ran for more than 120 s (differential-operator input 32650 of the long run).
+        var e = Assert.Throws<BeyondCapabilityException>(() => DifferentialOperator<GaussianRational>.Parse(Ring, "x*y*5.0^339244341d_y"));
+        Assert.Contains("5.0^339244341", e.Message);
+        Assert.Equal(DifferentialOperator<GaussianRational>.Parse(Ring, "625 d_y"), DifferentialOperator<GaussianRational>.Parse(Ring, "5^4 d_y"));
+    }
+}
