@@ -388,10 +388,26 @@ public sealed partial class LieAlgebra<T>
         var byDegree = DistinctDegreeFactors(f, p);
         reason = $"no Frobenius orbit of roots spanned the dual of the Cartan subalgebra modulo {p}";
         var linear = byDegree.Where(e => e.Degree == 1).SelectMany(e => SF.Roots(e.Product, p, random)).ToList();
-        foreach (var (d, product) in byDegree.OrderByDescending(e => e.Degree).Take(4))
+        foreach (var (d, product) in byDegree.OrderByDescending(e => e.Degree).Take(3))
         {
             var g = IrreducibleFactor(product, d, p, random);
-            var attempt = RootSystemFromOrbit(f, g, d, linear, polynomials, kappaInverse, r, p, out var why);
+
+            var attempt = RootSystemFromOrbit(f, g, d, linear, null, polynomials, kappaInverse, r, p, out var why);
+
+            // If the orbit does not suffice and the field degree is small, all roots of the factors whose degree divides
+            // d are found in the field F_p[s]/(g) too, so the starting set is as large as possible.
+            if (attempt is null && d > 1 && d <= 12)
+            {
+                var field = new ExtensionFieldRoots(g, p);
+                var more = new List<long[]>();
+                foreach (var (e, other) in byDegree.Where(e => e.Degree > 1 && d % e.Degree == 0))
+                {
+                    more.AddRange(field.Roots(other, random));
+                }
+
+                attempt = RootSystemFromOrbit(f, g, d, linear, more, polynomials, kappaInverse, r, p, out why);
+            }
+
             if (attempt is not null)
             {
                 reason = "";
@@ -455,12 +471,16 @@ public sealed partial class LieAlgebra<T>
     }
 
     private (Roots.CartanType Type, Matrix<Rational> Cartan)? RootSystemFromOrbit(
-        long[] f, long[] g, int d, List<long> linear, long[][] polynomials, long[,] kappaInverse, int r, long p, out string reason)
+        long[] f, long[] g, int d, List<long> linear, List<long[]>? more, long[][] polynomials, long[,] kappaInverse, int r, long p, out string reason)
     {
         // The field F_p[s]/(g); the orbit s, s^p, ..., s^(p^(d-1)) are d roots of f, i.e. values α(h); the roots of the
         // linear factors of f lie in the prime field inside it and join the starting set.
         var orbit = new List<long[]>();
-        if (d > 1)
+        if (more is not null)
+        {
+            orbit.AddRange(more);
+        }
+        else if (d > 1)
         {
             long[] sigma = SF.Remainder([0, 1], g, p);
             for (var k = 0; k < d; k++)
