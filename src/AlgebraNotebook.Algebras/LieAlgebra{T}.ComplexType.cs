@@ -395,8 +395,9 @@ public sealed partial class LieAlgebra<T>
             var attempt = RootSystemFromOrbit(f, g, d, linear, null, polynomials, kappaInverse, r, p, out var why);
 
             // If the orbit does not suffice and the field degree is small, all roots of the factors whose degree divides
-            // d are found in the field F_p[s]/(g) too, so the starting set is as large as possible.
-            if (attempt is null && d > 1 && d <= 12)
+            // d are found in the field F_p[s]/(g) too, so the starting set is as large as possible (for moderate sizes:
+            // the splitting over the extension field costs about (n - r)^2 d^3 log p operations).
+            if (attempt is null && d > 1 && d <= 12 && m <= 150)
             {
                 var field = new ExtensionFieldRoots(g, p);
                 var more = new List<long[]>();

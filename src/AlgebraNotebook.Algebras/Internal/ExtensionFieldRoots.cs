@@ -113,10 +113,10 @@ internal sealed class ExtensionFieldRoots(long[] modulus, long p)
         var result = new List<long[]>();
         var stack = new Stack<long[][]>();
         stack.Push(Monic(f.Select(c => c == 0 ? Array.Empty<long>() : new[] { c }).ToArray()));
-        var attempts = 0;
         while (stack.Count > 0)
         {
             var g = stack.Pop();
+            var attempts = 0;
             if (g.Length == 2)
             {
                 result.Add(SmallPrimeField.Subtract([], g[0], p));
@@ -125,7 +125,7 @@ internal sealed class ExtensionFieldRoots(long[] modulus, long p)
 
             while (true)
             {
-                if (++attempts > 200)
+                if (++attempts > 100)
                 {
                     throw new InvalidOperationException("Equal-degree splitting over the extension field did not converge.");
                 }
