@@ -110,4 +110,22 @@ public class ComplexifiedTypeTests(ITestOutputHelper output)
         var gl2 = LieAlgebras.GeneralLinear<Rational>(2);
         Assert.Throws<ExactArgumentException>(() => gl2.TypeOfComplexification());
     }
+
+    [Theory]
+    // B2 (dimension 10): Bourbaki Plate II; the split variants fail on this dense basis (checked in the test).
+    [InlineData("B2", 3)]
+    public void Summary_of_a_dense_basis_names_the_type_and_says_what_it_rests_on(string type, int seed)
+    {
+        var algebra = DenseBasisChange.Disguise(Chevalley(type), seed);
+        var summary = algebra.Summary();
+        foreach (var note in summary.Notes)
+        {
+            output.WriteLine(note);
+        }
+
+        Assert.Equal(CartanType.Parse(type), summary.LeviFactorType);
+        var split = algebra.Complexify().RootDecomposition().IsSplit;
+        // When the split root decomposition fails, the fallback labels its result.
+        Assert.True(split || summary.Notes.Any(n => n.Contains("TypeOfComplexification") && n.Contains("modulo")));
+    }
 }
