@@ -128,4 +128,15 @@ public class ComplexifiedTypeTests(ITestOutputHelper output)
         // When the split root decomposition fails, the fallback labels its result.
         Assert.True(split || summary.Notes.Any(n => n.Contains("TypeOfComplexification") && n.Contains("modulo")));
     }
+
+    [Fact]
+    public void Non_rational_structure_constants_are_refused_with_the_bracket_named()
+    {
+        // sl(2) over Q(i) in the basis i e_1, e_2, e_3 has brackets with coefficient ±i (common practice: rescaling a basis element scales its brackets).
+        var sl2 = LieAlgebras.SpecialLinear<GaussianRational>(2);
+        var rescaled = sl2.InBasis([GaussianRational.I * sl2.Basis(0), sl2.Basis(1), sl2.Basis(2)]);
+        var error = Assert.Throws<BeyondCapabilityException>(() => rescaled.TypeOfComplexification());
+        Assert.Contains("rational structure constants", error.Message);
+        Assert.Contains(rescaled.Label, error.Message);
+    }
 }
