@@ -401,12 +401,19 @@ public sealed partial class LieAlgebra<T>
             {
                 var field = new ExtensionFieldRoots(g, p);
                 var more = new List<long[]>();
-                foreach (var (e, other) in byDegree.Where(e => e.Degree > 1 && d % e.Degree == 0))
+                try
                 {
-                    more.AddRange(field.Roots(other, random));
-                }
+                    foreach (var (e, other) in byDegree.Where(e => e.Degree > 1 && d % e.Degree == 0))
+                    {
+                        more.AddRange(field.Roots(other, random));
+                    }
 
-                attempt = RootSystemFromOrbit(f, g, d, linear, more, polynomials, kappaInverse, r, p, out why);
+                    attempt = RootSystemFromOrbit(f, g, d, linear, more, polynomials, kappaInverse, r, p, out why);
+                }
+                catch (InvalidOperationException e)
+                {
+                    why = $"{e.Message} (modulo {p})";
+                }
             }
 
             if (attempt is not null)
@@ -734,9 +741,9 @@ public sealed partial class LieAlgebra<T>
         {
             (type, order) = IdentifyInBourbakiOrder(cartan);
         }
-        catch (ExactArgumentException e)
+        catch (Exception e) when (e is ExactArgumentException or BeyondCapabilityException)
         {
-            reason = $"the Cartan matrix modulo {p} is not of finite type ({e.Message})";
+            reason = $"the Cartan matrix modulo {p} was not identified ({e.Message})";
             return null;
         }
 
