@@ -9,6 +9,8 @@ public sealed partial class LieAlgebra<T>
     /// The main invariants in one object (<see cref="LieAlgebraSummary"/>): nilpotent / solvable / semisimple, dimensions
     /// of centre, derived algebra, radical and nilradical, the Levi factor and its Cartan type over C (for
     /// LieAlgebra&lt;Rational&gt; the Levi factor is complexified first), the simple ideals of a semisimple algebra.
+    /// When no split Cartan subalgebra is found (a generic dense basis), the type comes from
+    /// <see cref="TypeOfComplexification"/> and a note states what it rests on (roots computed modulo primes).
     /// Cost: a Levi decomposition plus a root decomposition of the Levi factor.
     /// </summary>
     public LieAlgebraSummary Summary()
@@ -44,6 +46,22 @@ public sealed partial class LieAlgebra<T>
             catch (BeyondCapabilityException e)
             {
                 notes.Add($"type not reached: {e.Message}");
+            }
+
+            if (type is null)
+            {
+                // Fallback without a split Cartan subalgebra: the type of the complexification from roots modulo primes,
+                // labelled with what it rests on.
+                try
+                {
+                    var complexified = factor.TypeOfComplexification();
+                    type = complexified.Type;
+                    notes.Add($"type {complexified.Type} by TypeOfComplexification: {complexified.RestsOn}");
+                }
+                catch (BeyondCapabilityException e)
+                {
+                    notes.Add($"type of the complexification not reached either: {e.Message}");
+                }
             }
         }
 

@@ -1,0 +1,70 @@
+using AlgebraNotebook.Algebras;
+using AlgebraNotebook.Algebras.Chevalley;
+using AlgebraNotebook.Exact.Scalars;
+using BenchmarkDotNet.Attributes;
+
+namespace AlgebraNotebook.Benchmarks.Algebras;
+
+/// <summary>
+/// The type of the complexification of E6 and E8 given in a dense random unimodular integer basis (fixed seed), where no
+/// split Cartan subalgebra is visible and the root decompositions report "not split": Killing form modulo a prime,
+/// Cartan subalgebra, roots in the field of a Frobenius orbit at two primes, exact closure and identification. Each
+/// iteration gets a freshly built algebra. Fixed small iteration counts (the E8 case takes tens of seconds).
+/// </summary>
+[WarmupCount(0)]
+[IterationCount(2)]
+public class ComplexifiedTypeBenchmarks
+{
+    private LieAlgebra<Rational> _plain = null!;
+    private List<LieElement<Rational>> _basis = null!;
+    private LieAlgebra<Rational> _algebra = null!;
+
+    /// <summary>The Cartan type.</summary>
+    [Params("E6", "E8")]
+    public string Type { get; set; } = "E6";
+
+    /// <summary>Builds the Chevalley algebra and the dense random basis once.</summary>
+    [GlobalSetup]
+    public void Prepare() => (_plain, _basis) = DenseRandomBasis(Type, 11);
+
+    /// <summary>A fresh algebra in the dense basis before every iteration.</summary>
+    [IterationSetup]
+    public void Rebuild() => _algebra = _plain.InBasis(_basis);
+
+    /// <summary>Type of the complexification.</summary>
+    [Benchmark]
+    public string TypeOfComplexification() => _algebra.TypeOfComplexification().Type.ToString();
+
+    /// <summary>
+    /// The Chevalley algebra and a dense unimodular basis: identity rows changed by two sweeps of random transvections
+    /// (row i += ±row j), then shuffled.
+    /// </summary>
+    public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) DenseRandomBasis(string type, int seed)
+    {
+        var chevalley = ChevalleyBasis.Of(type);
+        var algebra = chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension);
+        var random = new Random(seed);
+        var n = algebra.Dimension;
+        var rows = Enumerable.Range(0, n).Select(i =>
+        {
+            var v = new long[n];
+            v[i] = 1;
+            return v;
+        }).ToArray();
+        for (var sweep = 0; sweep < 2; sweep++)
+        {
+            for (var i = 0; i < n; i++)
+            {
+                var j = (i + 1 + random.Next(n - 1)) % n;
+                var c = random.Next(2) == 0 ? -1 : 1;
+                for (var k = 0; k < n; k++)
+                {
+                    rows[i][k] += c * rows[j][k];
+                }
+            }
+        }
+
+        var basis = rows.OrderBy(_ => random.Next()).Select(v => algebra.Element(v.Select(c => (Rational)c).ToArray())).ToList();
+        return (algebra, basis);
+    }
+}
