@@ -16,7 +16,7 @@ namespace AlgebraNotebook.Exact.Polynomials;
 /// Products and powers written in the text are charged against a work budget (<see cref="MaxWork"/>, counted as
 /// term products weighted by coefficient size) so that a short text cannot ask for an expansion that runs for minutes;
 /// over the budget the parser throws <see cref="BeyondCapabilityException"/> and the same product can still be built
-/// with <see cref="Polynomial{T}.Pow(int)"/> and '*' on polynomial objects, which have no such limit.
+/// with '*' and <see cref="Polynomial{T}.Pow(int, PowerLimits)"/> on polynomial objects, whose limits the caller sets.
 /// </summary>
 internal sealed class PolynomialParser<T>
     where T : IFieldElement<T>
@@ -24,7 +24,9 @@ internal sealed class PolynomialParser<T>
     private const int MaxNesting = 200;
 
     /// <summary>Work budget of one parse: the sum over products of (terms x terms x coefficient words).</summary>
-    private const long MaxWork = 100_000;
+    /// <remarks>Ten million units is about half a second of multiplication on one core (estimate); it admits
+    /// (x+1)^500 and (x+y+z)^30 and refuses (x+1)^2000.</remarks>
+    private const long MaxWork = 10_000_000;
 
     /// <summary>Largest coefficient, in bits, that a power written in the text may produce.</summary>
     private const long MaxPowerBits = 1 << 20;
@@ -285,7 +287,7 @@ internal sealed class PolynomialParser<T>
 
     private BeyondCapabilityException Beyond(string problem) => new(
         $"Cannot parse \"{Shorten(_text)}\" as a polynomial: {problem} (limit {MaxWork:N0} units of work per text). "
-        + "Build it from smaller parsed pieces with Pow and '*' on the polynomial objects, which have no such limit.");
+        + "Build it from smaller parsed pieces with '*' and Pow(exponent, PowerLimits) on the polynomial objects.");
 
     private static string Shorten(string text) => (text.Length > 200 ? text[..200] + "..." : text).Replace('\n', ' ').Replace('\r', ' ');
 

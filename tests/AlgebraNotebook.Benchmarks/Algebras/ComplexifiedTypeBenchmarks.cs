@@ -20,8 +20,11 @@ public class ComplexifiedTypeBenchmarks
     private LieAlgebra<Rational> _algebra = null!;
 
     /// <summary>The Cartan type.</summary>
-    [Params("E6", "E8")]
+    [ParamsSource(nameof(Types))]
     public string Type { get; set; } = "E6";
+
+    /// <summary>E6 and E8; only E6 in the short CI mode.</summary>
+    public static IEnumerable<string> Types => AlgebraNotebook.Benchmarks.Groups.BenchmarkMode.IsShort ? ["E6"] : ["E6", "E8"];
 
     /// <summary>Builds the Chevalley algebra and the dense random basis once.</summary>
     [GlobalSetup]

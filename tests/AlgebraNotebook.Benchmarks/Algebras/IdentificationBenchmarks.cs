@@ -19,8 +19,11 @@ public class IdentificationBenchmarks
     private LieAlgebra<Rational> _algebra = null!;
 
     /// <summary>The Cartan type.</summary>
-    [Params("E6", "E7", "E8")]
+    [ParamsSource(nameof(Types))]
     public string Type { get; set; } = "E6";
+
+    /// <summary>E6, E7 and E8; only E6 in the short CI mode.</summary>
+    public static IEnumerable<string> Types => AlgebraNotebook.Benchmarks.Groups.BenchmarkMode.IsShort ? ["E6"] : ["E6", "E7", "E8"];
 
     /// <summary>Builds the Chevalley algebra and the random basis once.</summary>
     [GlobalSetup]
@@ -48,9 +51,16 @@ public class IdentificationVariantBenchmarks
     private List<LieElement<Rational>> _basis = null!;
     private LieAlgebra<Rational> _algebra = null!;
 
-    /// <summary>Builds the Chevalley algebra of E6 and the random basis once.</summary>
+    /// <summary>The Cartan type: E6, or B3 in the short CI mode (where the reference would take minutes).</summary>
+    [ParamsSource(nameof(Types))]
+    public string Type { get; set; } = "E6";
+
+    /// <summary>E6; B3 in the short CI mode.</summary>
+    public static IEnumerable<string> Types => AlgebraNotebook.Benchmarks.Groups.BenchmarkMode.IsShort ? ["B3"] : ["E6"];
+
+    /// <summary>Builds the Chevalley algebra and the random basis once.</summary>
     [GlobalSetup]
-    public void Prepare() => (_plain, _basis) = RandomBasis.Prepare("E6", 7);
+    public void Prepare() => (_plain, _basis) = RandomBasis.Prepare(Type, 7);
 
     /// <summary>A fresh algebra in the random basis before every iteration (nothing cached between variants).</summary>
     [IterationSetup]

@@ -19,17 +19,18 @@ public class PolynomialPowerLimitTests
     }
 
     [Fact]
-    public void Raised_limit_lets_a_large_power_through_and_the_middle_coefficient_is_the_central_binomial()
+    public void Raised_limit_lets_a_power_through_that_a_lower_limit_refuses_and_the_middle_coefficient_is_the_central_binomial()
     {
-        // (x + 1)^12000: the coefficient of x^6000 is C(12000, 6000) (binomial theorem, common practice).
-        var result = P("x + 1").Pow(12_000, new PowerLimits { MaxTotalDegree = 12_000 });
-        Assert.Equal(12_001, result.Terms.Count);
+        Assert.Throws<BeyondCapabilityException>(() => P("x + 1").Pow(600, new PowerLimits { MaxTotalDegree = 500 }));
+        // (x + 1)^600: the coefficient of x^300 is C(600, 300) (binomial theorem, common practice).
+        var result = P("x + 1").Pow(600, new PowerLimits { MaxTotalDegree = 600 });
+        Assert.Equal(601, result.Terms.Count);
         var x = Symbol.Of("x");
-        var middle = result.Terms.Single(t => t.Monomial.ExponentOf(x) == 6000).Coefficient;
+        var middle = result.Terms.Single(t => t.Monomial.ExponentOf(x) == 300).Coefficient;
         var central = BigInteger.One;
-        for (var j = 1; j <= 6000; j++)
+        for (var j = 1; j <= 300; j++)
         {
-            central = central * (6000 + j) / j;
+            central = central * (300 + j) / j;
         }
 
         Assert.Equal(new Rational(central), middle);
@@ -53,5 +54,16 @@ public class PolynomialPowerLimitTests
     public void Invalid_limits_are_refused()
     {
         Assert.Throws<ExactArgumentException>(() => P("x + 1").Pow(2, new PowerLimits { MaxTerms = 0 }));
+    }
+
+    [Fact]
+    public void Text_asking_for_a_moderate_power_is_parsed_and_a_huge_expansion_is_refused_by_the_parse_budget()
+    {
+        // (x + 1)^500 has 501 terms and the coefficient of x^1 is 500 (binomial theorem, common practice).
+        var p = P("(x + 1)^500");
+        Assert.Equal(501, p.Terms.Count);
+        Assert.Contains(p.Terms, t => t.Monomial.ExponentOf(Symbol.Of("x")) == 1 && t.Coefficient == new Rational(500));
+        var e = Assert.Throws<BeyondCapabilityException>(() => P("(x + y + z + w)^60"));
+        Assert.Contains("(x + y + z + w)^60", e.Message);
     }
 }
