@@ -24,9 +24,9 @@ internal sealed class PolynomialParser<T>
     private const int MaxNesting = 200;
 
     /// <summary>Work budget of one parse: the sum over products of (terms x terms x coefficient words).</summary>
-    /// <remarks>Ten million units is about half a second of multiplication on one core (estimate); it admits
-    /// (x+1)^500 and (x+y+z)^30 and refuses (x+1)^2000.</remarks>
-    private const long MaxWork = 10_000_000;
+    /// <remarks>An estimate, not measured: it admits (x+1)^100 and (x+y+z)^8 and refuses (x+1)^1000 and long products
+    /// of binomials with Gaussian coefficients, which took seconds each when fuzzed.</remarks>
+    private const long MaxWork = 100_000;
 
     /// <summary>Largest coefficient, in bits, that a power written in the text may produce.</summary>
     private const long MaxPowerBits = 1 << 20;

@@ -59,10 +59,10 @@ public class PolynomialPowerLimitTests
     [Fact]
     public void Text_asking_for_a_moderate_power_is_parsed_and_a_huge_expansion_is_refused_by_the_parse_budget()
     {
-        // (x + 1)^500 has 501 terms and the coefficient of x^1 is 500 (binomial theorem, common practice).
-        var p = P("(x + 1)^500");
-        Assert.Equal(501, p.Terms.Count);
-        Assert.Contains(p.Terms, t => t.Monomial.ExponentOf(Symbol.Of("x")) == 1 && t.Coefficient == new Rational(500));
+        // (x + 1)^100 has 101 terms and the coefficient of x^1 is 100 (binomial theorem, common practice).
+        var p = P("(x + 1)^100");
+        Assert.Equal(101, p.Terms.Count);
+        Assert.Contains(p.Terms, t => t.Monomial.ExponentOf(Symbol.Of("x")) == 1 && t.Coefficient == new Rational(100));
         var e = Assert.Throws<BeyondCapabilityException>(() => P("(x + y + z + w)^60"));
         Assert.Contains("(x + y + z + w)^60", e.Message);
     }
