@@ -6,7 +6,7 @@ using BenchmarkDotNet.Attributes;
 namespace AlgebraNotebook.Benchmarks.Groups;
 
 /// <summary>
-/// Exact exp(tX) for an 8x8 rational matrix whose eigenvalues lie in Q(i) (issue 8 target: within 100 ms). X = P D P^-1
+/// Exact exp(tX) for an 8x8 rational matrix whose eigenvalues lie in Q(i) (performance target in the README: within 100 ms). X = P D P^-1
 /// with D the direct sum of rotation generators of rates 1 and 2, the block [[1, -1], [1, 1]] (eigenvalues 1 +- i)
 /// and a nilpotent 2x2 Jordan block, and P a unimodular integer matrix, so X is dense and not diagonalisable.
 /// </summary>

@@ -3,7 +3,7 @@ using BenchmarkDotNet.Attributes;
 
 namespace AlgebraNotebook.Benchmarks.Groups;
 
-/// <summary>The Zassenhaus exponents C2..CN of e^(X+Y) = e^X e^Y e^(C2) ... (issue 8 target: N = 16 within 30 s).</summary>
+/// <summary>The Zassenhaus exponents C2..CN of e^(X+Y) = e^X e^Y e^(C2) ... (performance target in the README: N = 16 within 30 s).</summary>
 [Config(typeof(FewIterationsConfig))]
 public class ZassenhausBenchmarks
 {

@@ -7,7 +7,7 @@ namespace AlgebraNotebook.Benchmarks.Roots;
 /// <summary>
 /// All dominant weight multiplicities of E8 irreducibles (Bourbaki numbering) from scratch: the packed variant (the
 /// library's default) beside the reference variant, in the same run. The highest weights span 24 to 6,068 dominant
-/// weights, for the scaling of time against the number of dominant weights; (0,0,0,1,0,0,0,0) is the issue 8 workload
+/// weights, for the scaling of time against the number of dominant weights; (0,0,0,1,0,0,0,0) is the performance-target workload
 /// (dimension 6,899,079,264). The root system's integer tables are built once, outside the measurement.
 /// </summary>
 public class FreudenthalBenchmarks

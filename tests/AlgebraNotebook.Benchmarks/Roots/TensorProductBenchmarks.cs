@@ -7,8 +7,8 @@ namespace AlgebraNotebook.Benchmarks.Roots;
 /// <summary>
 /// E8 tensor products decomposed from scratch (fresh representations each time, so the smaller factor's Freudenthal
 /// multiplicities are included): the public <see cref="TensorProduct.Decompose(IrreducibleRepresentation[])"/> (packed
-/// Brauer-Klimyk plus building the sorted sum), and the packed and reference Brauer-Klimyk kernels side by side. The issue 8
-/// workloads are 3875 x 3875 and V(omega_1 + omega_8) x V(omega_1 + omega_8) (40 distinct irreducibles).
+/// Brauer-Klimyk plus building the sorted sum), and the packed and reference Brauer-Klimyk kernels side by side. The
+/// performance-target workloads are 3875 x 3875 and V(omega_1 + omega_8) x V(omega_1 + omega_8) (40 distinct irreducibles).
 /// </summary>
 public class TensorProductBenchmarks
 {
