@@ -67,7 +67,19 @@ public static class BakerCampbellHausdorff
                 }
 
                 break;
+            case BakerCampbellHausdorffMethod.WordCoefficientRows when x != y:
+                (limits ?? SeriesLimits.Default).CheckWordCoefficientDegree(what, degree);
+                var ir = algebra.Alphabet.IndexOf(x);
+                var jr = algebra.Alphabet.IndexOf(y);
+                var rowTerms = BchLyndonRowSolver.TrySolve(degree, Math.Min(ir, jr), Math.Max(ir, jr), firstIsSmall: ir < jr);
+                if (rowTerms is not null)
+                {
+                    return LieSeries.FromSortedTerms(algebra, rowTerms.ToArray(), degree + 1);
+                }
+
+                break;
             case BakerCampbellHausdorffMethod.WordCoefficients:
+            case BakerCampbellHausdorffMethod.WordCoefficientRows:
             case BakerCampbellHausdorffMethod.AssociativeLogarithm:
                 break;
             default:

@@ -17,4 +17,11 @@ public enum BakerCampbellHausdorffMethod
     /// projection onto the Lyndon basis. Capped by <see cref="SeriesLimits.MaxAssociativeWords"/>.
     /// </summary>
     AssociativeLogarithm,
+
+    /// <summary>
+    /// The same word coefficients and triangular system as <see cref="WordCoefficients"/>, solved row by row: the
+    /// pairing of every Lyndon word u with all bracketed Lyndon words comes from the pairings of u's factors, so no
+    /// long bracket is ever expanded. Capped by <see cref="SeriesLimits.MaxWordCoefficientDegree"/>.
+    /// </summary>
+    WordCoefficientRows,
 }
