@@ -26,20 +26,20 @@ internal static class BchLyndonRowSolver
     /// <summary>
     /// The non-zero Lyndon coordinates of log(e^A e^B) in degrees 1..N, by degree then word; words are written with the
     /// letters <paramref name="smallLetter"/> (bit 0) and <paramref name="largeLetter"/> (bit 1) of the alphabet.
-    /// <paramref name="firstIsSmall"/>: A is the smaller letter. Null on 128-bit overflow.
+    /// <paramref name="firstIsSmall"/>: A is the smaller letter. Null on 128-bit overflow. <paramref name="tableLength"/>:
+    /// rows of words up to this length are tabulated; <paramref name="wideOnly"/> skips the 64-bit attempt (tests).
     /// </summary>
-    public static List<(LyndonWord Word, Rational Coefficient)>? TrySolve(int degree, int smallLetter, int largeLetter, bool firstIsSmall, int? threads = null, int tableLength = TableLength)
+    public static List<(LyndonWord Word, Rational Coefficient)>? TrySolve(int degree, int smallLetter, int largeLetter, bool firstIsSmall, int? threads = null, int tableLength = TableLength, bool wideOnly = false)
     {
         var firstLetter = firstIsSmall ? 0 : 1;
         var result = new List<(LyndonWord Word, Rational Coefficient)>();
-        tableLength = int.TryParse(Environment.GetEnvironmentVariable("TMPT"), out var tt) ? tt : tableLength;
         var rows = new BinaryBracketRows(Math.Max(1, Math.Min(tableLength, degree)), degree);
-        var parallelism = threads ?? (int.TryParse(Environment.GetEnvironmentVariable("TMPTH"), out var th) ? th : Environment.ProcessorCount);
+        var parallelism = threads ?? Environment.ProcessorCount;
         var workers = new ConcurrentBag<BinaryRowWorker>();
         for (var n = 1; n <= degree; n++)
         {
             var table = rows.Lyndon[n];
-            var coefficients = SolveDegree(table, firstLetter, parallelism, rows, workers);
+            var coefficients = SolveDegree(table, firstLetter, parallelism, rows, workers, wideOnly);
             if (coefficients is null)
             {
                 return null;
@@ -57,7 +57,7 @@ internal static class BchLyndonRowSolver
         return result;
     }
 
-    private static Rational[]? SolveDegree(BinaryLyndonTable table, int firstLetter, int parallelism, BinaryBracketRows rows, ConcurrentBag<BinaryRowWorker> workers)
+    private static Rational[]? SolveDegree(BinaryLyndonTable table, int firstLetter, int parallelism, BinaryBracketRows rows, ConcurrentBag<BinaryRowWorker> workers, bool wideOnly)
     {
         var n = table.Length;
         var words = table.Words;
@@ -107,7 +107,7 @@ internal static class BchLyndonRowSolver
             }
 
             var done = false;
-            if (scaled.All(v => v >= long.MinValue && v <= long.MaxValue))
+            if (!wideOnly && scaled.All(v => v >= long.MinValue && v <= long.MaxValue))
             {
                 var z = scaled.Select(v => (long)v).ToArray();
                 try

@@ -51,27 +51,28 @@ internal sealed class BinaryBracketRows
         }
 
         var worker = new BinaryRowWorker(this);
+        // Two passes per length (count, then fill), so the table is allocated once at its final size.
         for (var length = 2; length <= shortLength; length++)
         {
             var count = 1 << length;
             var starts = new int[count + 1];
-            var keys = new List<int>();
-            var values = new List<int>();
             for (var x = 0; x < count; x++)
             {
-                starts[x] = keys.Count;
-                var row = worker.BuildShort(x, length);
-                for (var i = 0; i < row.Count; i++)
-                {
-                    keys.Add(row.Keys[row.Start + i]);
-                    values.Add(row.Values[row.Start + i]);
-                }
+                starts[x + 1] = starts[x] + worker.BuildShort(x, length).Count;
             }
 
-            starts[count] = keys.Count;
+            var keys = new int[starts[count]];
+            var values = new int[starts[count]];
+            for (var x = 0; x < count; x++)
+            {
+                var row = worker.BuildShort(x, length);
+                Array.Copy(row.Keys, row.Start, keys, starts[x], row.Count);
+                Array.Copy(row.Values, row.Start, values, starts[x], row.Count);
+            }
+
             _starts[length] = starts;
-            _keys[length] = keys.ToArray();
-            _values[length] = values.ToArray();
+            _keys[length] = keys;
+            _values[length] = values;
         }
     }
 
