@@ -10,11 +10,13 @@ namespace AlgebraNotebook.Groups.Series;
 /// <see cref="BchLyndonSolver"/> (z(u) = sum over Lyndon w &lt;= u of c(w) &lt;P(w), u&gt;, unit diagonal, per
 /// multidegree, scaled to integers), solved row by row: c(u) = z(u) - sum over w &lt; u of c(w) &lt;P(w), u&gt;, where
 /// the row &lt;P(w), u&gt; over all Lyndon w comes from the rows of u's factors (<see cref="BinaryBracketRows"/>), so no
-/// bracket P(w) is ever expanded beyond the short table.
+/// bracket P(w) is ever expanded and no matrix is stored.
 /// </summary>
 /// <remarks>
 /// Cost per Lyndon word u of length n: the rows of its factors longer than the table (about (n - T)^2 / 2 of them for
-/// table length T), each summed over its cuts; memory: the short table, one row's scratch per thread and the
+/// table length T), each summed over its cuts and holding only the right-factor lengths that a top-down pass marks as
+/// needed; at n = 20 the factor rows take about 2.1e8 products, 95% of the time (measured). Memory: the short table,
+/// the Lyndon words of each length up to N with their rank bit sets, one row's scratch per thread and the
 /// coefficients. Multidegrees are independent and run in parallel. Values are 64-bit integers with overflow checks,
 /// then 128-bit; null when even those overflow (the caller then uses the reference variant).
 /// </remarks>
