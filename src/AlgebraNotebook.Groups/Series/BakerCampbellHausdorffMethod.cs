@@ -24,7 +24,7 @@ public enum BakerCampbellHausdorffMethod
     /// row: the pairings of a Lyndon word u with all standard bracketings come from the pairings of u's factors (a
     /// table for words up to 12 letters), so no long bracket is ever expanded. Memory: the table (under 1 MB), the
     /// Lyndon words of each length and one row's scratch per thread (peak working set 73 MB at N = 20 including about
-    /// 38 MB of runtime, measured); processor time at N = 20 about as for <see cref="WordCoefficients"/> (7.7 s,
+    /// 38 MB of runtime, measured); processor time at N = 20 about as for <see cref="WordCoefficients"/> (5.7-7.7 s,
     /// measured), growing six- to tenfold per two degrees. Capped by <see cref="SeriesLimits.MaxWordCoefficientDegree"/>.
     /// </summary>
     WordCoefficientRows,

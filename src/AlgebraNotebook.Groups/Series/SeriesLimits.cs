@@ -16,7 +16,7 @@ public sealed class SeriesLimits
 
     /// <summary>
     /// The default degree cap of the word-coefficient methods: 22. Their time grows about threefold per degree (row
-    /// variant, measured: degree 20 7.7 s, degree 22 74 s of processor time), so degree 22 is already minutes.
+    /// variant, measured: degree 20 6-8 s, degree 22 74 s of processor time), so degree 22 is already minutes.
     /// </summary>
     public const int DefaultMaxWordCoefficientDegree = 22;
 
