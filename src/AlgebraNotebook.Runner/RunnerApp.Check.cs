@@ -34,17 +34,11 @@ public static partial class RunnerApp
 
                     break;
                 default:
-                    if (arg.StartsWith('-') && arg.Length > 1)
+                    if (TakeNotebookArgument("check", arg, ref notebook) is { } misuse)
                     {
-                        return await UsageError(stderr, $"algebra-notebook check: unknown option '{arg}'.").ConfigureAwait(false);
+                        return await UsageError(stderr, misuse).ConfigureAwait(false);
                     }
 
-                    if (notebook is not null)
-                    {
-                        return await UsageError(stderr, $"algebra-notebook check: unexpected extra argument '{arg}' (one notebook per check).").ConfigureAwait(false);
-                    }
-
-                    notebook = arg;
                     break;
             }
         }
@@ -54,22 +48,9 @@ public static partial class RunnerApp
             return await UsageError(stderr, "algebra-notebook check: missing notebook path (.ipynb).").ConfigureAwait(false);
         }
 
-        IReadOnlyList<NotebookCell> cells;
-        StoredNotebook stored;
-        try
+        if (LoadWithStoredOutputs(notebook, out var cells, out var stored) is { } unreadable)
         {
-            stored = StoredNotebook.Load(notebook);
-            cells = NotebookFile.Load(notebook);
-        }
-        catch (NotebookLoadException e)
-        {
-            return await UsageError(stderr, e.Message).ConfigureAwait(false);
-        }
-
-        if (cells.Count != stored.Cells.Count)
-        {
-            return await UsageError(stderr,
-                $"Notebook '{notebook}': {cells.Count} cells were parsed but the file lists {stored.Cells.Count}; the outputs cannot be matched to cells.").ConfigureAwait(false);
+            return await UsageError(stderr, unreadable).ConfigureAwait(false);
         }
 
         if (!stored.HasStoredRuns)

@@ -38,17 +38,11 @@ public static partial class RunnerApp
 
                     break;
                 default:
-                    if (arg.StartsWith('-') && arg.Length > 1)
+                    if (TakeNotebookArgument("export", arg, ref notebook) is { } misuse)
                     {
-                        return await UsageError(stderr, $"algebra-notebook export: unknown option '{arg}'.").ConfigureAwait(false);
+                        return await UsageError(stderr, misuse).ConfigureAwait(false);
                     }
 
-                    if (notebook is not null)
-                    {
-                        return await UsageError(stderr, $"algebra-notebook export: unexpected extra argument '{arg}' (one notebook per export).").ConfigureAwait(false);
-                    }
-
-                    notebook = arg;
                     break;
             }
         }
@@ -63,22 +57,9 @@ public static partial class RunnerApp
             return await UsageError(stderr, "algebra-notebook export: missing '--format html' or '--format latex'.").ConfigureAwait(false);
         }
 
-        IReadOnlyList<NotebookCell> cells;
-        StoredNotebook stored;
-        try
+        if (LoadWithStoredOutputs(notebook, out var cells, out var stored) is { } unreadable)
         {
-            stored = StoredNotebook.Load(notebook);
-            cells = NotebookFile.Load(notebook);
-        }
-        catch (NotebookLoadException e)
-        {
-            return await UsageError(stderr, e.Message.Replace("nothing to compare", "nothing to export", StringComparison.Ordinal)).ConfigureAwait(false);
-        }
-
-        if (cells.Count != stored.Cells.Count)
-        {
-            return await UsageError(stderr,
-                $"Notebook '{notebook}': {cells.Count} cells were parsed but the file lists {stored.Cells.Count}; the outputs cannot be matched to cells.").ConfigureAwait(false);
+            return await UsageError(stderr, unreadable.Replace("nothing to compare", "nothing to export", StringComparison.Ordinal)).ConfigureAwait(false);
         }
 
         if (!stored.HasStoredRuns && cells.Any(c => c.Kind == CellKind.Code))

@@ -62,17 +62,11 @@ public static partial class RunnerApp
 
                     break;
                 default:
-                    if (arg.StartsWith('-') && arg.Length > 1)
+                    if (TakeNotebookArgument("run", arg, ref notebook) is { } misuse)
                     {
-                        return await UsageError(stderr, $"algebra-notebook run: unknown option '{arg}'.").ConfigureAwait(false);
+                        return await UsageError(stderr, misuse).ConfigureAwait(false);
                     }
 
-                    if (notebook is not null)
-                    {
-                        return await UsageError(stderr, $"algebra-notebook run: unexpected extra argument '{arg}' (one notebook per run).").ConfigureAwait(false);
-                    }
-
-                    notebook = arg;
                     break;
             }
         }

@@ -1,4 +1,5 @@
 using System.Globalization;
+using AlgebraNotebook.Runner.Documents;
 using AlgebraNotebook.Runner.Execution;
 
 namespace AlgebraNotebook.Runner;
@@ -140,6 +141,50 @@ public static partial class RunnerApp
     {
         await stderr.WriteLineAsync(message).ConfigureAwait(false);
         return ExitUsageError;
+    }
+
+    /// <summary>
+    /// Takes a positional argument of <paramref name="command"/> as the notebook path. The usage error to print when it
+    /// is an unknown option or a second notebook; null when it was taken.
+    /// </summary>
+    private static string? TakeNotebookArgument(string command, string arg, ref string? notebook)
+    {
+        if (arg.StartsWith('-') && arg.Length > 1)
+        {
+            return $"algebra-notebook {command}: unknown option '{arg}'.";
+        }
+
+        if (notebook is not null)
+        {
+            return $"algebra-notebook {command}: unexpected extra argument '{arg}' (one notebook per {command}).";
+        }
+
+        notebook = arg;
+        return null;
+    }
+
+    /// <summary>
+    /// Reads a notebook file together with its stored outputs (check and export). The usage error to print when it cannot
+    /// be read or its cells and stored outputs do not match; null when <paramref name="cells"/> and
+    /// <paramref name="stored"/> were read.
+    /// </summary>
+    private static string? LoadWithStoredOutputs(string notebook, out IReadOnlyList<NotebookCell> cells, out StoredNotebook stored)
+    {
+        cells = [];
+        stored = null!;
+        try
+        {
+            stored = StoredNotebook.Load(notebook);
+            cells = NotebookFile.Load(notebook);
+        }
+        catch (NotebookLoadException e)
+        {
+            return e.Message;
+        }
+
+        return cells.Count == stored.Cells.Count
+            ? null
+            : $"Notebook '{notebook}': {cells.Count} cells were parsed but the file lists {stored.Cells.Count}; the outputs cannot be matched to cells.";
     }
 
     /// <summary>Reads the value after option <paramref name="index"/>; null (with the message written) when it is missing.</summary>

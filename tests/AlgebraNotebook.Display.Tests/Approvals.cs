@@ -1,13 +1,13 @@
 using System.Runtime.CompilerServices;
-using System.Text;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Display.Tests;
 
 /// <summary>
-/// Approved-file checks: the expected output of a formatter is kept in Approved/NAME.approved.txt beside the tests
-/// (copied to the output folder). On a mismatch the actual output is written to Approved/NAME.received.txt in the
-/// source folder (or the output folder when the sources are absent) and the check fails with a diff summary.
-/// To approve a change, review the received file and rename it to .approved.txt.
+/// Approved-file checks (<see cref="ApprovedFiles"/>): the expected text is kept in Approved/NAME.approved.txt beside
+/// the tests (copied to the output folder); on a mismatch the actual text is written to Approved/NAME.received.txt in
+/// the source folder and the check fails with where the two first differ. To approve a change, review the received
+/// file and rename it to .approved.txt.
 /// </summary>
 internal static class Approvals
 {
@@ -31,45 +31,9 @@ internal static class Approvals
 
     private static string? Check(string name, string received)
     {
-        var approvedPath = Path.Combine(AppContext.BaseDirectory, "Approved", name + ".approved.txt");
-        var sourceFolder = Path.Combine(Path.GetDirectoryName(ThisFile()) ?? string.Empty, "Approved");
-        var receivedFolder = Directory.Exists(sourceFolder) ? sourceFolder : Path.Combine(AppContext.BaseDirectory, "Approved");
-        var receivedPath = Path.Combine(receivedFolder, name + ".received.txt");
-        var approved = File.Exists(approvedPath) ? Normalise(File.ReadAllText(approvedPath, Encoding.UTF8)) : null;
-        if (approved == received)
-        {
-            if (File.Exists(receivedPath))
-            {
-                File.Delete(receivedPath);
-            }
-
-            return null;
-        }
-
-        Directory.CreateDirectory(receivedFolder);
-        File.WriteAllText(receivedPath, received + "\n", new UTF8Encoding(false));
-        if (approved is null)
-        {
-            return $"{name}: no approved file at {approvedPath}; the output was written to {receivedPath}.";
-        }
-
-        return $"{name}: output differs from the approved file. {DiffSummary(approved, received)} Received output written to {receivedPath}.";
+        var (approved, receivedPath) = ApprovedFiles.CopiedToOutput(name, Path.GetDirectoryName(ThisFile()) ?? string.Empty);
+        return ApprovedFiles.Compare(name, approved, receivedPath, received, ignoreTrailingNewlines: true);
     }
 
     private static string ThisFile([CallerFilePath] string path = "") => path;
-
-    private static string Normalise(string text) => text.Replace("\r\n", "\n").TrimEnd('\n');
-
-    private static string DiffSummary(string approved, string received)
-    {
-        var at = 0;
-        while (at < approved.Length && at < received.Length && approved[at] == received[at])
-        {
-            at++;
-        }
-
-        string Around(string text) => text.Substring(Math.Max(0, at - 20), Math.Min(text.Length, at + 40) - Math.Max(0, at - 20));
-        return $"First difference at character {at} (approved length {approved.Length}, received length {received.Length}): " +
-            $"approved \"...{Around(approved)}...\" vs received \"...{Around(received)}...\".";
-    }
 }

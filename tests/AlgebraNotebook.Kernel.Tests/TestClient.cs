@@ -16,8 +16,10 @@ internal sealed record Received(string Type, JsonObject Header, JsonObject Paren
 
 /// <summary>
 /// A minimal Jupyter front end written independently of the kernel's own wire code: DEALER sockets for shell and
-/// control, a SUB socket for iopub, HMAC-SHA256 signing with <see cref="HMACSHA256"/>. Every wait is bounded.
-/// Not thread-safe: one test drives it at a time.
+/// control, a SUB socket for iopub, HMAC-SHA256 signing with <see cref="HMACSHA256"/>. Every wait is bounded; a
+/// malformed or wrongly signed message from the kernel throws <see cref="InvalidDataException"/>.
+/// Not thread-safe: one test drives it at a time. It uses no test framework, so the benchmark suite links this file
+/// too (tests/AlgebraNotebook.Benchmarks/Kernel/KernelStartupRun.cs) and times a real kernel process with it.
 /// </summary>
 internal sealed class TestClient : IDisposable
 {
@@ -222,10 +224,20 @@ internal sealed class TestClient : IDisposable
     private Received Decode(List<byte[]> frames)
     {
         var start = frames.FindIndex(f => f.AsSpan().SequenceEqual(Delimiter));
-        Assert.True(start >= 0, "A kernel message lacked the <IDS|MSG> delimiter.");
+        if (start < 0)
+        {
+            throw new InvalidDataException("A kernel message lacked the <IDS|MSG> delimiter.");
+        }
+
+
         var signed = frames.Skip(start + 2).Take(4).ToArray();
         // The kernel must sign what it sends (jupyter_client drops unsigned messages too).
-        Assert.Equal(Sign(key, signed), Encoding.ASCII.GetString(frames[start + 1]));
+        var signature = Encoding.ASCII.GetString(frames[start + 1]);
+        if (signature != Sign(key, signed))
+        {
+            throw new InvalidDataException($"A kernel message carried the signature '{signature}', not the HMAC-SHA256 of its frames.");
+        }
+
         var header = (JsonObject)JsonNode.Parse(signed[0])!;
         return new Received(header["msg_type"]!.GetValue<string>(), header, (JsonObject)JsonNode.Parse(signed[1])!,
             (JsonObject)JsonNode.Parse(signed[3])!);

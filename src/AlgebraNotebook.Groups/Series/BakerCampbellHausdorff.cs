@@ -11,8 +11,9 @@ namespace AlgebraNotebook.Groups.Series;
 /// basis of the free Lie algebra, to a chosen degree N. Results are <see cref="LieSeries"/> with truncation order N + 1.
 /// </summary>
 /// <remarks>
-/// Default method for log(e^x e^y) with two generators: <see cref="BakerCampbellHausdorffMethod.WordCoefficients"/>
-/// (coefficients of Lyndon words from their runs, then a triangular solve on Lyndon words only; see the enum). The
+/// Default method for log(e^x e^y) with two generators: <see cref="BakerCampbellHausdorffMethod.WordCoefficientRows"/>
+/// (coefficients of Lyndon words from their runs, then a triangular solve on Lyndon words only, row by row; see the
+/// enum). The
 /// other entry points, and <see cref="BakerCampbellHausdorffMethod.AssociativeLogarithm"/> (the reference variant):
 /// (1) in the free associative algebra truncated after degree N, stored densely per degree, form the product
 /// of the truncated exponentials and its logarithm sum (-1)^(m+1) u^m / m with u = product - 1 as the right factor
@@ -28,7 +29,7 @@ public static class BakerCampbellHausdorff
     /// <exception cref="ExactArgumentException">Degree below 1.</exception>
     /// <exception cref="BeyondCapabilityException">The degree exceeds the size cap (the message gives the estimated size).</exception>
     public static LieSeries Series(int degree, SeriesLimits? limits = null) =>
-        Series(new FreeLieAlgebra("X", "Y"), "X", "Y", degree, BakerCampbellHausdorffMethod.WordCoefficients, limits);
+        Series(new FreeLieAlgebra("X", "Y"), "X", "Y", degree, BakerCampbellHausdorffMethod.WordCoefficientRows, limits);
 
     /// <summary>log(e^X e^Y) to degree N on generators X &lt; Y, by a chosen method (both give the same series).</summary>
     /// <exception cref="ExactArgumentException">Degree below 1 or an unknown method.</exception>
@@ -40,11 +41,11 @@ public static class BakerCampbellHausdorff
     /// <exception cref="ExactArgumentException">Degree below 1 or an unknown generator.</exception>
     /// <exception cref="BeyondCapabilityException">The degree exceeds the cap.</exception>
     public static LieSeries Series(FreeLieAlgebra algebra, string x, string y, int degree, SeriesLimits? limits = null) =>
-        Series(algebra, x, y, degree, BakerCampbellHausdorffMethod.WordCoefficients, limits);
+        Series(algebra, x, y, degree, BakerCampbellHausdorffMethod.WordCoefficientRows, limits);
 
     /// <summary>
     /// log(e^x e^y) to degree N for two generators of a free Lie algebra, by a chosen method. The word-coefficient
-    /// method needs two different generators; for x = y the reference method runs (the answer is 2x).
+    /// methods need two different generators; for x = y the reference method runs (the answer is 2x).
     /// </summary>
     /// <exception cref="ExactArgumentException">Degree below 1, an unknown generator or an unknown method.</exception>
     /// <exception cref="BeyondCapabilityException">The degree exceeds the cap of the method.</exception>
@@ -67,14 +68,26 @@ public static class BakerCampbellHausdorff
                 }
 
                 break;
+            case BakerCampbellHausdorffMethod.WordCoefficientRows when x != y:
+                (limits ?? SeriesLimits.Default).CheckWordCoefficientDegree(what, degree);
+                var ir = algebra.Alphabet.IndexOf(x);
+                var jr = algebra.Alphabet.IndexOf(y);
+                var rowTerms = BchLyndonRowSolver.TrySolve(degree, Math.Min(ir, jr), Math.Max(ir, jr), firstIsSmall: ir < jr);
+                if (rowTerms is not null)
+                {
+                    return LieSeries.FromSortedTerms(algebra, rowTerms.ToArray(), degree + 1);
+                }
+
+                break;
             case BakerCampbellHausdorffMethod.WordCoefficients:
+            case BakerCampbellHausdorffMethod.WordCoefficientRows:
             case BakerCampbellHausdorffMethod.AssociativeLogarithm:
                 break;
             default:
                 throw new ExactArgumentException($"Unknown Baker-Campbell-Hausdorff method {(int)method}.", nameof(method));
         }
 
-        // Reference variant; also the fallback when a 128-bit value of the word-coefficient method overflows.
+        // Reference variant; also the fallback when a 128-bit value of a word-coefficient method overflows.
         return LogOfProduct([gx, gy], degree, limits, what);
     }
 

@@ -77,6 +77,126 @@ internal static class BchWordCoefficients
         }
     }
 
+    /// <summary>lcm(1..n) / (j + 1) for j = 0..n-1, the weights of the integral in <see cref="TryScaledCoefficient"/>.</summary>
+    public static Int128[] LcmQuotients(int n)
+    {
+        Int128 lcm = 1;
+        for (var i = 2; i <= n; i++)
+        {
+            lcm = checked(lcm / Gcd(lcm, i) * i);
+        }
+
+        var quotients = new Int128[n];
+        for (var j = 0; j < n; j++)
+        {
+            quotients[j] = lcm / (j + 1);
+        }
+
+        return quotients;
+    }
+
+    /// <summary>
+    /// n! lcm(1..n) z(w) in 128-bit integers without divisions (the multinomial as a product of binomials); false when
+    /// a value overflows (then <see cref="ScaledCoefficient"/> gives it).
+    /// </summary>
+    public static bool TryScaledCoefficient(int code, int n, int firstLetter, Int128[] lcmQuotients, out Int128 value)
+    {
+        Span<int> runs = stackalloc int[n];
+        var runCount = 0;
+        var c = 0;
+        var previous = -1;
+        for (var i = n - 1; i >= 0; i--)
+        {
+            var letter = (code >> i) & 1;
+            if (letter == previous)
+            {
+                runs[runCount - 1]++;
+            }
+            else
+            {
+                if (previous == firstLetter)
+                {
+                    c++;
+                }
+
+                runs[runCount++] = 1;
+                previous = letter;
+            }
+        }
+
+        Span<Int128> r = stackalloc Int128[n + c + 1];
+        Span<Int128> next = stackalloc Int128[n + c + 1];
+        r.Clear();
+        r[0] = 1;
+        var degree = 0;
+        Int128 multinomial = 1;
+        try
+        {
+            checked
+            {
+                foreach (var run in runs[..runCount])
+                {
+                    var f = Fubini[run];
+                    next[..(degree + run + 1)].Clear();
+                    for (var i = 0; i <= degree; i++)
+                    {
+                        var ri = r[i];
+                        if (ri == 0)
+                        {
+                            continue;
+                        }
+
+                        for (var k = 1; k <= run; k++)
+                        {
+                            next[i + k] += ri * f[k];
+                        }
+                    }
+
+                    degree += run;
+                    multinomial *= Binomials[degree][run];
+                    next[..(degree + 1)].CopyTo(r);
+                }
+
+                // Q(s) = R(s) (1 + s)^c / s^(c + 1): only the coefficients of s^(c + 1 + j), j + 1 <= n, are needed.
+                var binomial = Binomials[c];
+                Int128 sum = 0;
+                for (var j = 0; j + c + 1 <= degree + c; j++)
+                {
+                    Int128 q = 0;
+                    var target = j + c + 1;
+                    for (var k = Math.Max(0, target - degree); k <= c && k <= target; k++)
+                    {
+                        q += r[target - k] * binomial[k];
+                    }
+
+                    if (q != 0)
+                    {
+                        var term = q * lcmQuotients[j];
+                        sum += (j % 2 == 0) ? term : -term;
+                    }
+                }
+
+                value = multinomial * sum;
+                return true;
+            }
+        }
+        catch (OverflowException)
+        {
+            value = 0;
+            return false;
+        }
+    }
+
+    private static Int128 Gcd(Int128 a, Int128 b)
+    {
+        while (b != 0)
+        {
+            (a, b) = (b, a % b);
+        }
+
+        return a;
+    }
+
     private static BigInteger ScaledCore(ReadOnlySpan<int> runs, int n, int c, BigInteger lcm, BigInteger factorial)
     {
         // R(s) = prod Fub_r(s) (1 + s)^c, degrees up to n + c.

@@ -17,7 +17,8 @@ internal sealed class BinaryLyndonTable
     private readonly int[] _blockRanks;
     private readonly ulong[][][] _factors;
 
-    public BinaryLyndonTable(int n)
+    /// <summary>The table for length n; <paramref name="withFactors"/> false leaves out the prefix and suffix bit sets.</summary>
+    public BinaryLyndonTable(int n, bool withFactors = true)
     {
         Length = n;
         var size = 1L << n;
@@ -40,6 +41,11 @@ internal sealed class BinaryLyndonTable
 
         // _factors[p][s]: words of length p found at offset s.
         _factors = new ulong[n][][];
+        if (!withFactors)
+        {
+            return;
+        }
+
         for (var p = 1; p < n; p++)
         {
             _factors[p] = new ulong[n - p + 1][];

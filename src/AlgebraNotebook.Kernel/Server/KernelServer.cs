@@ -66,7 +66,10 @@ public sealed class KernelServer : IDisposable
     /// <summary>Completes when a shutdown_request without restart has been answered.</summary>
     public Task Completion => completion.Task;
 
-    /// <summary>Binds the sockets, starts the poller thread and starts building the C# session in the background.</summary>
+    /// <summary>
+    /// Starts building the C# session in the background, then binds the sockets and starts the poller thread. When a
+    /// socket cannot bind, the session being built is disposed by <see cref="Dispose"/>.
+    /// </summary>
     /// <exception cref="InvalidOperationException">The server was already started or disposed.</exception>
     /// <exception cref="NetMQException">A socket could not bind (for example, the port is taken).</exception>
     public void Start()
@@ -80,6 +83,13 @@ public sealed class KernelServer : IDisposable
         if (!signer.IsEnabled)
         {
             log.WriteLine("algebra-notebook-kernel: the connection file has an empty key; messages are not signed or checked.");
+        }
+
+        // The C# session takes seconds to build (see CSharpSession.CreateAsync): it starts first, on the thread pool, so
+        // that loading ZeroMQ and binding the sockets overlap with it instead of delaying it.
+        lock (sessionGate)
+        {
+            session = CreateSessionAsync();
         }
 
         shell = new RouterSocket();
@@ -109,10 +119,6 @@ public sealed class KernelServer : IDisposable
         outbox.ReceiveReady += (_, e) => Drain(e.Queue);
         poller = new NetMQPoller { shell, control, stdin, heartbeat, outbox };
         poller.RunAsync("algebra-notebook-kernel poller");
-        lock (sessionGate)
-        {
-            session = CreateSessionAsync();
-        }
 
         worker = Task.Run(RunShellWorkerAsync);
         Publish("status", new JsonObject { ["execution_state"] = "starting" }, null);

@@ -118,8 +118,7 @@ public sealed class NotebookExecutor : IDisposable
             return;
         }
 
-        var prelude = string.Join(Environment.NewLine, AlgebraNotebookNamespaces.All.Select(n => $"using {n};"));
-        var result = await kernel.SendAsync(new SubmitCode(prelude)).ConfigureAwait(false);
+        var result = await kernel.SendAsync(new SubmitCode(AlgebraNotebookNamespaces.ToUsingDirectives())).ConfigureAwait(false);
         var failed = result.Events.OfType<CommandFailed>().FirstOrDefault();
         if (failed is not null)
         {

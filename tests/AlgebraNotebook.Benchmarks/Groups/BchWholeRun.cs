@@ -17,10 +17,27 @@ public static class BchWholeRun
     // J. Math. Phys. 50 (2009) 033513 (from memory; the paper was not at hand to re-check the page).
     private const int NonZeroThroughDegree20 = 76_760;
 
-    /// <summary>Runs the degrees given (default 20); returns 1 when degree 20 does not give the published count, else 0.</summary>
-    public static int Run(string[] degrees)
+    /// <summary>
+    /// Runs the degrees given (default 20) by the method named with <c>--method NAME</c> (default: the row variant);
+    /// returns 1 when degree 20 does not give the published count, else 0.
+    /// </summary>
+    public static int Run(string[] arguments)
     {
-        var list = degrees.Length == 0 ? [20] : degrees.Select(int.Parse).ToArray();
+        var method = BakerCampbellHausdorffMethod.WordCoefficientRows;
+        var degrees = new List<string>();
+        for (var i = 0; i < arguments.Length; i++)
+        {
+            if (arguments[i] == "--method" && i + 1 < arguments.Length)
+            {
+                method = Enum.Parse<BakerCampbellHausdorffMethod>(arguments[++i]);
+            }
+            else
+            {
+                degrees.Add(arguments[i]);
+            }
+        }
+
+        var list = degrees.Count == 0 ? [20] : degrees.Select(int.Parse).ToArray();
         var limits = new SeriesLimits(1L << 40, SeriesLimits.WordCoefficientDegreeLimit);
         var result = 0;
         foreach (var degree in list)
@@ -28,12 +45,12 @@ public static class BchWholeRun
             var process = Process.GetCurrentProcess();
             var cpu = process.TotalProcessorTime;
             var clock = Stopwatch.StartNew();
-            var z = BakerCampbellHausdorff.Series(degree, BakerCampbellHausdorffMethod.WordCoefficients, limits);
+            var z = BakerCampbellHausdorff.Series(degree, method, limits);
             clock.Stop();
             process.Refresh();
             var basis = Enumerable.Range(1, degree).Sum(d => (long)AlgebraNotebook.Groups.FreeLie.LyndonWord.CountByWitt(2, d));
             Console.WriteLine(
-                $"degree {degree}: {z.Terms.Count} non-zero of {basis} basis elements; wall {clock.Elapsed.TotalSeconds:F2} s; " +
+                $"{method} degree {degree}: {z.Terms.Count} non-zero of {basis} basis elements; wall {clock.Elapsed.TotalSeconds:F2} s; " +
                 $"processor {(process.TotalProcessorTime - cpu).TotalSeconds:F2} s; peak working set {process.PeakWorkingSet64 / (1024 * 1024)} MB " +
                 $"(process so far); allocated {GC.GetTotalAllocatedBytes() / (1024 * 1024)} MB");
             if (degree == 20)
