@@ -11,7 +11,8 @@ namespace AlgebraNotebook.Algebras;
 /// </summary>
 public sealed class ComplexifiedType
 {
-    internal ComplexifiedType(CartanType type, Matrix<Rational> cartanMatrix, int dimension, int rank, IReadOnlyList<long> primes, int primesTried, string restsOn)
+    internal ComplexifiedType(
+        CartanType type, Matrix<Rational> cartanMatrix, int dimension, int rank, IReadOnlyList<long> primes, int primesTried, string provedExactly, string checkedModuloPrimes)
     {
         Type = type;
         CartanMatrix = cartanMatrix;
@@ -19,7 +20,10 @@ public sealed class ComplexifiedType
         Rank = rank;
         Primes = primes;
         PrimesTried = primesTried;
-        RestsOn = restsOn;
+        ProvedExactly = provedExactly;
+        CheckedModuloPrimes = checkedModuloPrimes;
+        RestsOn = $"type of the complexification, from the roots computed modulo the primes {primes[0]} and {primes[1]} (the same Cartan matrix at both); "
+            + $"proved exactly over Q: {provedExactly}; checked modulo the primes: {checkedModuloPrimes}";
     }
 
     /// <summary>The Cartan type of the complexified algebra (components in Bourbaki's numbering, Plates I-IX).</summary>
@@ -40,7 +44,15 @@ public sealed class ComplexifiedType
     /// <summary>How many primes were examined in total (including the ones where the roots could not be assembled).</summary>
     public int PrimesTried { get; }
 
-    /// <summary>What the result rests on: the facts proved exactly over Q and the ones checked modulo the primes.</summary>
+    /// <summary>The facts proved exactly over Q, in words (dimension, semisimplicity, an upper bound for the rank).</summary>
+    public string ProvedExactly { get; }
+
+    /// <summary>The facts checked only modulo the two <see cref="Primes"/>, not proved over Q, in words (the rank, the roots,
+    /// integral Cartan numbers).</summary>
+    public string CheckedModuloPrimes { get; }
+
+    /// <summary>What the result rests on: the primes, then <see cref="ProvedExactly"/> and <see cref="CheckedModuloPrimes"/>
+    /// in one sentence.</summary>
     public string RestsOn { get; }
 
     /// <summary>Plain text: the type, with what it rests on.</summary>

@@ -35,10 +35,38 @@ public sealed partial class LieAlgebra<T>
     /// and the type. Dispatcher: <see cref="RootDecompositionModular"/> (fast, every result proved exactly) when it
     /// applies, otherwise <see cref="RootDecompositionReference"/>; both give the same output when both apply. The
     /// conventions (order of roots, normalisation of root vectors, Bourbaki numbering) are those documented at
-    /// <see cref="RootDecompositionReference"/>.
+    /// <see cref="RootDecompositionReference"/>. Computed once per algebra and cached (the result is immutable).
     /// </summary>
     /// <exception cref="ExactArgumentException">The algebra is not semisimple.</exception>
-    public RootDecomposition<T> RootDecomposition() => TryRootDecompositionModular(out _) ?? RootDecompositionReference();
+    public RootDecomposition<T> RootDecomposition() =>
+        _rootDecomposition ??= TryRootDecompositionModular(out _) ?? RootDecompositionReference();
+
+    private RootDecomposition<T>? _rootDecomposition;
+
+    internal RootDecomposition<T>? CachedRootDecomposition => _rootDecomposition;
+
+    /// <summary>The cached root decomposition, or the modular variant's (then cached, as the dispatcher would return it),
+    /// or null when the modular variant does not apply; never runs the reference variant.</summary>
+    internal RootDecomposition<T>? CachedOrModularRootDecomposition()
+    {
+        if (_rootDecomposition is { } known)
+        {
+            return known;
+        }
+
+        if (!IsSemisimple)
+        {
+            return null;
+        }
+
+        var modular = TryRootDecompositionModular(out _);
+        if (modular is not null)
+        {
+            _rootDecomposition = modular;
+        }
+
+        return modular;
+    }
 
     /// <summary>
     /// The root decomposition by the reference variant (the test oracle), with respect to <see cref="CartanSubalgebra"/>. A random element h

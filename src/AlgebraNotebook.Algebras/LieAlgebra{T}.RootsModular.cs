@@ -150,16 +150,61 @@ public sealed partial class LieAlgebra<T>
             }
         }
 
-        if (commuting.Count == 0)
+        if (commuting.Count > 0)
+        {
+            var fromBasis = FromCartan(Echelon(commuting.Select(j => Vectors<T>.Unit(n, j))), out reason);
+            if (fromBasis is not null)
+            {
+                return fromBasis;
+            }
+
+            reason = $"the span of the {commuting.Count} commuting toral basis elements ({string.Join(", ", commuting.Select(j => _names[j]))}): {reason}";
+        }
+        else
         {
             reason = "no basis element has an adjoint action that is diagonalisable over the field";
+        }
+
+        // (1') No split Cartan subalgebra among the basis elements (a dense basis): the verified Cartan subalgebra of
+        // CartanSubalgebra, the one the reference variant uses, so both variants again give the same output.
+        T[][] cartan;
+        try
+        {
+            cartan = CartanCore();
+        }
+        catch (BeyondCapabilityException e)
+        {
+            reason += $"; no Cartan subalgebra: {e.Message}";
             return null;
         }
 
-        var h = Echelon(commuting.Select(j => Vectors<T>.Unit(n, j)));
+        var fromCartan = FromCartan(cartan, out var cartanReason);
+        if (fromCartan is null)
+        {
+            reason += $"; with the Cartan subalgebra of CartanSubalgebra: {cartanReason}";
+        }
+
+        return fromCartan;
+
+        RootDecomposition<T>? FromCartan(T[][] h, out string reason)
+        {
         var r = h.Length;
         var m = n - r;
-        var hResidues = h.Select(v => v.Select(c => PrimeField.FromRational(RationalPart<T>.TryToRational(c)!.Value)!.Value).ToArray()).ToArray();
+        var hResidues = new ulong[r][];
+        for (var i = 0; i < r; i++)
+        {
+            hResidues[i] = new ulong[n];
+            for (var a = 0; a < n; a++)
+            {
+                if (RationalPart<T>.TryToRational(h[i][a]) is not { } q || PrimeField.FromRational(q) is not { } u)
+                {
+                    reason = "a Cartan subalgebra basis vector has a coordinate that is not rational or not reducible modulo the prime";
+                    return null;
+                }
+
+                hResidues[i][a] = u;
+            }
+        }
 
         // (2) Eigenvectors of ad x on its image for a random x in span(h), modulo p.
         List<ulong[]>? eigenvectors = null;
@@ -214,7 +259,7 @@ public sealed partial class LieAlgebra<T>
 
         if (eigenvectors is null)
         {
-            reason = $"the span of the {r} commuting toral basis elements ({string.Join(", ", commuting.Select(j => _names[j]))}) is not a split Cartan subalgebra modulo the prime";
+            reason = "it is not a split Cartan subalgebra modulo the prime";
             return null;
         }
 
@@ -331,6 +376,7 @@ public sealed partial class LieAlgebra<T>
 
         reason = "no random element of the Cartan subalgebra separated the roots";
         return null;
+        }
     }
 
     /// <summary>

@@ -201,7 +201,22 @@ public sealed partial class LieAlgebra<T>
     }
 
     /// <summary>
-    /// The decomposition of a semisimple algebra into simple ideals (over the field of T), each as a canonical basis.
+    /// The decomposition of a semisimple algebra into simple ideals (over the field of T), each as a canonical basis, listed
+    /// in the order of their first basis coordinate. Dispatcher, computed once per algebra and cached: when the modular
+    /// certificate of <see cref="TryCertifySimpleModular"/> proves the algebra simple, the answer is the whole algebra
+    /// (what <see cref="SimpleIdealsReference"/> returns for a simple algebra); otherwise <see cref="SimpleIdealsReference"/>.
+    /// </summary>
+    /// <exception cref="ExactArgumentException">The algebra is not semisimple.</exception>
+    /// <exception cref="BeyondCapabilityException">See <see cref="SimpleIdealsReference"/>.</exception>
+    public IReadOnlyList<IReadOnlyList<LieElement<T>>> SimpleIdeals()
+    {
+        RequireSemisimpleForIdeals();
+        var pieces = _simpleIdeals ??= TryCertifySimpleModular(out _) ? [AllBasis()] : SimpleIdealPiecesReference();
+        return pieces.Select(ToElements).ToArray();
+    }
+
+    /// <summary>
+    /// The reference variant of <see cref="SimpleIdeals"/> (the test oracle), not cached.
     /// Method: the centroid Γ = {φ : φ ad(x) = ad(x) φ for all x} of a semisimple algebra is a product of fields, one
     /// per simple ideal; the eigenspaces of a random element of Γ (fixed seed), and the kernel of its eigenvalue-free
     /// characteristic factor, are ideals, split recursively until each piece has a centroid that is a field
@@ -211,7 +226,15 @@ public sealed partial class LieAlgebra<T>
     /// <exception cref="ExactArgumentException">The algebra is not semisimple.</exception>
     /// <exception cref="BeyondCapabilityException">A piece has a centroid of degree above 3 over the field that could not be
     /// split (deciding it would need polynomial factoring).</exception>
-    public IReadOnlyList<IReadOnlyList<LieElement<T>>> SimpleIdeals()
+    public IReadOnlyList<IReadOnlyList<LieElement<T>>> SimpleIdealsReference()
+    {
+        RequireSemisimpleForIdeals();
+        return SimpleIdealPiecesReference().Select(ToElements).ToArray();
+    }
+
+    private T[][][]? _simpleIdeals;
+
+    private void RequireSemisimpleForIdeals()
     {
         if (!IsSemisimple)
         {
@@ -219,10 +242,13 @@ public sealed partial class LieAlgebra<T>
                 $"{Label} is not semisimple (its Killing form is degenerate), so it is not a sum of simple ideals; see LeviDecomposition.",
                 "this");
         }
+    }
 
+    private T[][][] SimpleIdealPiecesReference()
+    {
         var random = new Random(20261201);
         var pieces = SplitIdeal(AllBasis(), random, 0);
-        return pieces.OrderBy(FirstCoordinate).Select(ToElements).ToArray();
+        return pieces.OrderBy(FirstCoordinate).ToArray();
     }
 
     internal T[][] RadicalCore() => KillingOrthogonalCore(BracketSpaces(AllBasis(), AllBasis()));

@@ -8,7 +8,8 @@ public sealed partial class LieAlgebra<T>
     /// <summary>
     /// The main invariants in one object (<see cref="LieAlgebraSummary"/>): nilpotent / solvable / semisimple, dimensions
     /// of centre, derived algebra, radical and nilradical, the Levi factor and its Cartan type over C (for
-    /// LieAlgebra&lt;Rational&gt; the Levi factor is complexified first), the simple ideals of a semisimple algebra.
+    /// LieAlgebra&lt;Rational&gt; the Levi factor's own root decomposition when it is split over Q, otherwise that of its
+    /// complexification), the simple ideals of a semisimple algebra.
     /// When no split Cartan subalgebra is found (a generic dense basis), the type comes from
     /// <see cref="TypeOfComplexification"/> and a note states what it rests on (roots computed modulo primes).
     /// Cost: a Levi decomposition plus a root decomposition of the Levi factor.
@@ -21,11 +22,13 @@ public sealed partial class LieAlgebra<T>
         Roots.CartanType? type = null;
         if (levi.LeviFactor.Count > 0)
         {
-            var factor = SubalgebraOnBasis(levi.LeviFactor.Select(e => e.CoefficientArray).ToArray());
+            // A semisimple algebra is its own Levi factor: use it directly, so its cached decompositions are shared with
+            // the real-form name and the Casimir degrees.
+            var factor = levi.Radical.Count == 0 ? this : SubalgebraOnBasis(levi.LeviFactor.Select(e => e.CoefficientArray).ToArray());
             try
             {
                 var roots = factor is LieAlgebra<Rational> real
-                    ? (object)real.Complexify().RootDecomposition()
+                    ? real.SplitRootDecompositionForType()
                     : factor.RootDecomposition();
                 switch (roots)
                 {

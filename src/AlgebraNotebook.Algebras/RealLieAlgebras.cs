@@ -84,6 +84,39 @@ public static class RealLieAlgebras
         return LieAlgebra<GaussianRational>.CreateTrusted(algebra.BasisNames.ToArray(), c, algebra.Warnings.ToArray(), $"complexification of {algebra.Label}");
     }
 
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<LieAlgebra<Rational>, LieAlgebra<GaussianRational>> Complexified = new();
+
+    /// <summary>
+    /// The complexification, built once per real algebra and kept while the real algebra lives, so that its cached root
+    /// decomposition is shared by the summary, the real-form name and the Casimir degrees.
+    /// </summary>
+    internal static LieAlgebra<GaussianRational> ComplexifyCached(this LieAlgebra<Rational> algebra) =>
+        Complexified.GetValue(algebra, a => a.Complexify());
+
+    /// <summary>
+    /// The root decomposition that gives the type of the complexification: the algebra's own root decomposition when it is
+    /// already cached or the modular variant proves one (a split Cartan subalgebra over Q stays a Cartan subalgebra over C
+    /// with the same roots), otherwise that of the cached complexification over Q(i). The real reference variant is not
+    /// run here: when the algebra is not split over Q it can spend long on factoring. Returned as RootDecomposition of
+    /// Rational or of GaussianRational.
+    /// </summary>
+    internal static object SplitRootDecompositionForType(this LieAlgebra<Rational> algebra)
+    {
+        if (algebra.CachedOrModularRootDecomposition() is { IsSplit: true, Type: not null } own)
+        {
+            return own;
+        }
+
+        return algebra.ComplexifyCached().RootDecomposition();
+    }
+
+    /// <summary>True, with the decomposition, when the cached complexification already holds its root decomposition.</summary>
+    internal static bool HasComplexRootDecomposition(this LieAlgebra<Rational> algebra, out RootDecomposition<GaussianRational> roots)
+    {
+        roots = null!;
+        return Complexified.TryGetValue(algebra, out var complex) && complex.CachedRootDecomposition is { } known && (roots = known) is not null;
+    }
+
     /// <summary>
     /// The signature of the Killing form (Sylvester inertia, exact): for a real semisimple algebra, negative definite
     /// means compact type (su(2): (0, 3, 0)); sl(2, R) gives (2, 1, 0); a zero count is the dimension of the kernel
@@ -129,7 +162,8 @@ public static class RealLieAlgebras
 
     /// <summary>
     /// Names a real SIMPLE Lie algebra. Method: the Cartan type X of the complexification (from
-    /// <see cref="LieAlgebra{T}.RootDecomposition"/> over Q(i)) and the dimension of a maximal compact subalgebra, which is
+    /// <see cref="LieAlgebra{T}.RootDecomposition"/> of the algebra when it is split over Q, otherwise of its
+    /// complexification over Q(i)) and the dimension of a maximal compact subalgebra, which is
     /// the number of negative squares of the Killing form (Cartan decomposition g = k ⊕ p, K negative on k and positive
     /// on p). These are compared with the list of real forms of each complex simple algebra and the dimensions of their
     /// maximal compact subalgebras (Helgason, Differential Geometry, Lie Groups, and Symmetric Spaces, ch. X, Table V,
@@ -152,13 +186,18 @@ public static class RealLieAlgebras
         }
 
         var signature = algebra.KillingSignature();
-        var roots = algebra.Complexify().RootDecomposition();
-        if (!roots.IsSplit || roots.Type is null)
+        var (isSplit, splitType, note) = algebra.SplitRootDecompositionForType() switch
         {
-            throw new BeyondCapabilityException($"The complexification of {algebra.Label} could not be split over Q(i): {roots.Note}");
+            RootDecomposition<Rational> own => (own.IsSplit, own.Type, own.Note),
+            RootDecomposition<GaussianRational> complex => (complex.IsSplit, complex.Type, complex.Note),
+            _ => throw new InvalidOperationException("Unexpected root decomposition type."),
+        };
+        if (!isSplit || splitType is null)
+        {
+            throw new BeyondCapabilityException($"The complexification of {algebra.Label} could not be split over Q(i): {note}");
         }
 
-        var type = roots.Type;
+        var type = splitType;
         var k = signature.Negative;
         List<string> candidates;
         if (type.Components.Count == 2)

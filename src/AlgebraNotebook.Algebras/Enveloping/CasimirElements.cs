@@ -194,6 +194,12 @@ public static class CasimirElements
     internal static CartanType IdentifyType<T>(LieAlgebra<T> algebra)
         where T : IFieldElement<T>
     {
+        if (algebra is LieAlgebra<Rational> realAlgebra && realAlgebra.HasComplexRootDecomposition(out var known) && known.IsSplit && known.Type is not null)
+        {
+            // Already computed for the summary or the real-form name: the type over C is the same.
+            return known.Type;
+        }
+
         var roots = algebra.RootDecomposition();
         if (roots.IsSplit && roots.Type is not null)
         {
@@ -202,7 +208,7 @@ public static class CasimirElements
 
         if (algebra is LieAlgebra<Rational> real)
         {
-            var complex = real.Complexify().RootDecomposition();
+            var complex = real.ComplexifyCached().RootDecomposition();
             if (complex.IsSplit && complex.Type is not null)
             {
                 return complex.Type;

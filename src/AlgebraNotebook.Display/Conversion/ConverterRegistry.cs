@@ -58,6 +58,7 @@ internal static class ConverterRegistry
         AddGeneric(typeof(AlgebraNotebook.Algebras.Enveloping.EnvelopingElement<>), Method(typeof(EnvelopingDisplay), nameof(EnvelopingDisplay.FromEnvelopingElement)));
         AddGeneric(typeof(LieAlgebra<>), Method(typeof(AlgebraDisplay), nameof(AlgebraDisplay.FromLieAlgebra)));
         AddExact<LieAlgebraSummary>(AlgebraDisplay.FromSummary);
+        AddExact<ComplexifiedType>(ComplexifiedTypeDisplay.FromComplexifiedType);
 
         // Roots layer (converters in Display/Lie).
         AddExact<Weight>(WeightDisplay.ToTree);

@@ -75,7 +75,8 @@ internal static partial class RepresentationDisplay
     /// quadratic Casimir in the physics normalisation C₂ = (λ, λ + 2ρ)/2 with long roots of squared length 2 (adjoint:
     /// dual Coxeter number), and the Dynkin index dim V · C₂ / dim g (physics convention: su(N) fundamental 1/2),
     /// per simple component when the algebra is not simple; for a simple algebra also the higher Casimir eigenvalues at the
-    /// basic degrees above 2, normalised as in <see cref="CasimirInvariants"/> (reference representation named).
+    /// basic degrees above 2, normalised as in <see cref="CasimirInvariants"/> (reference representation named), and for
+    /// type D_n the degree-n Pfaffian Casimir Pf(λ + ρ), the product of the orthonormal coordinates of λ + ρ.
     /// </summary>
     public static MathNode FromIrreducible(IrreducibleRepresentation representation)
     {
@@ -129,7 +130,8 @@ internal static partial class RepresentationDisplay
 
     /// <summary>
     /// For a simple algebra with basic degrees above 2 reached by the power sums of <see cref="CasimirInvariants"/>:
-    /// C₃ = …, C₄ = …, then the normalisation C_k = P_k(λ + ρ) − P_k(ρ) and the reference representation.
+    /// C₃ = …, C₄ = …, then the normalisation C_k = P_k(λ + ρ) − P_k(ρ) and the reference representation; for type D_n
+    /// also the Pfaffian Casimir Pf(λ + ρ) = (λ + ρ, e₁) ⋯ (λ + ρ, eₙ) with its normalisation.
     /// </summary>
     private static void HigherCasimirs(Card items, IrreducibleRepresentation representation)
     {
@@ -157,6 +159,22 @@ internal static partial class RepresentationDisplay
             MathNodes.Sum(new SumTerm(false, P(MathNodes.Sum(MathNodes.Symbol("lambda"), rho))), new SumTerm(true, P(rho)))));
         var reference = invariants.References[0];
         items.Words($"P_k sums (mu, x)^k over the weights mu of the {reference.Name} = {reference.HighestWeight}");
+        if (invariants.PfaffianDegree(0) is not { } n)
+        {
+            return;
+        }
+
+        // Type D: the degree-n invariant the power sums of the vector miss, the Pfaffian (normalisation of CasimirInvariants).
+        var pf = MathNodes.Upright("Pf");
+        var shifted = MathNodes.Sum(MathNodes.Symbol("lambda"), rho);
+        MathNode E(MathNode index) => new SubscriptNode(MathNodes.Symbol("e"), index);
+        items.Fact($"Pfaffian Casimir (degree {n})", MathNodes.Row(
+            pf, MathNodes.Fenced(shifted), MathNodes.Operator("="), MathDisplay.ToTree(representation.PfaffianCasimir)));
+        items.Formula(MathNodes.Row(
+            pf, MathNodes.Fenced(shifted), MathNodes.Operator("="),
+            Pair(shifted, E(MathNodes.Integer(1))), MathNodes.Operator("⋯"), Pair(shifted, E(MathNodes.Integer(n)))));
+        items.Words($"e_1, ..., e_{n} orthonormal with omega_{n} = (e_1 + ... + e_{n})/2 (Bourbaki's numbering); "
+            + $"the sign changes when nodes {n - 1} and {n} are exchanged");
     }
 
     /// <summary>

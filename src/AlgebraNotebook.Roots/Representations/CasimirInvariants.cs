@@ -24,8 +24,16 @@ namespace AlgebraNotebook.Roots.Representations;
 /// on V(p, q). Odd degrees change sign on the dual representation, even degrees do not.</para>
 /// <para>Power sums do not always generate the invariants: <see cref="IndependentDegrees"/> says which basic degrees
 /// (exponents + 1) are reached by algebraically independent power sums, tested by the Jacobian criterion at a fixed
-/// pseudo-random integer point. For D_n (n >= 4) with the vector representation the degree-n (Pfaffian) invariant is
-/// missing (the power sums of the weights +-e_i are even in each e_i); its Casimir eigenvalues are then not provided.</para>
+/// pseudo-random integer point. For D_n with the vector representation the degree-n invariant is missing (the power sums
+/// of the weights +-e_i are even in each e_i). It is supplied by the Pfaffian invariant (see <see cref="Pfaffian"/>):
+/// <c>Pf(x) = (x, e_1)(x, e_2) ... (x, e_n)</c>, with e_1, ..., e_n the orthonormal vectors of Bourbaki's Plate IV
+/// (alpha_i = e_i - e_(i+1) for i &lt; n, alpha_n = e_(n-1) + e_n, so omega_n = (e_1 + ... + e_n)/2 and the weights of
+/// the vector are +-e_i). Pf is invariant under the Weyl group of D_n (permutations and even numbers of sign changes of
+/// the e_i) but not under that of B_n, and it changes sign under the diagram automorphism exchanging nodes n - 1 and n.
+/// The degree-n Pfaffian Casimir acts on V(lambda) by <c>Pf(lambda + rho) - Pf(rho) = Pf(lambda + rho)</c> (the last
+/// coordinate of rho is 0); it is the Pfaffian of the element of the Cartan subalgebra as an antisymmetric 2n x 2n matrix
+/// in an orthonormal basis. Example: the half-spin V(omega_n) of D4 gives (7/2)(5/2)(3/2)(1/2) = 105/16, V(omega_3) gives
+/// -105/16, the vector 0.</para>
 /// </remarks>
 public sealed class CasimirInvariants
 {
@@ -37,6 +45,8 @@ public sealed class CasimirInvariants
     private readonly (int[] Weight, BigInteger Multiplicity)[][] _referenceWeights;
     private readonly WeightGeometry[] _geometries;
     private readonly Lazy<int[][]> _independent;
+    private readonly int[][]?[] _pfaffianAxes;
+    private readonly Lazy<bool[]> _pfaffianIndependent;
 
     private CasimirInvariants(RootSystem system, IrreducibleRepresentation[] references)
     {
@@ -47,6 +57,10 @@ public sealed class CasimirInvariants
             .Select(r => r.AllWeightsRaw(IrreducibleRepresentation.DefaultMaximumWeights, CancellationToken.None).ToArray())
             .ToArray();
         _independent = new Lazy<int[][]>(() => Enumerable.Range(0, references.Length).Select(FindIndependentDegrees).ToArray());
+        _pfaffianAxes = Enumerable.Range(0, references.Length).Select(c => PfaffianAxes(system.Components[c])).ToArray();
+        _pfaffianIndependent = new Lazy<bool[]>(() => Enumerable.Range(0, references.Length)
+            .Select(c => _pfaffianAxes[c] is not null && FindRankWithPfaffian(c) > _independent.Value[c].Length)
+            .ToArray());
     }
 
     /// <summary>The algebra.</summary>
@@ -55,10 +69,12 @@ public sealed class CasimirInvariants
     /// <summary>The reference representation of each simple factor, in the order of <see cref="RootSystem.Components"/>.</summary>
     public IReadOnlyList<IrreducibleRepresentation> References { get; }
 
-    /// <summary>True when, for every simple factor, the power sums of the basic degrees are algebraically independent and so
-    /// generate all Weyl invariants (hence all Casimir eigenvalues).</summary>
+    /// <summary>True when, for every simple factor, the independent power sums (<see cref="IndependentDegrees"/>) together
+    /// with the Pfaffian for a factor of type D (<see cref="PfaffianDegree"/>) number as many as the rank, so that they are
+    /// algebraically independent and generate all Weyl invariants (hence all Casimir eigenvalues). Tested by the Jacobian
+    /// criterion as described at <see cref="IndependentDegrees"/>.</summary>
     public bool GeneratesAllInvariants => Enumerable.Range(0, References.Count)
-        .All(c => _independent.Value[c].Length == System.Components[c].Rank);
+        .All(c => _independent.Value[c].Length + (_pfaffianIndependent.Value[c] ? 1 : 0) == System.Components[c].Rank);
 
     /// <summary>
     /// The invariants with the default references (see the class remarks), cached per root system.
@@ -177,6 +193,60 @@ public sealed class CasimirInvariants
         return EigenvalueCore(representation, component, degree);
     }
 
+    /// <summary>
+    /// The degree of the Pfaffian invariant of simple factor <paramref name="component"/>: n for a factor of type D_n
+    /// (including the low-rank D2 and D3 when given as D), null for every other family.
+    /// </summary>
+    /// <param name="component">Zero-based simple factor.</param>
+    public int? PfaffianDegree(int component) => _pfaffianAxes[CheckComponent(component)]?.Length;
+
+    /// <summary>
+    /// The Pfaffian invariant of a factor of type D_n at a weight x: <c>Pf(x) = (x, e_1) ... (x, e_n)</c> with Bourbaki's
+    /// orthonormal e_i (Plate IV; see the class remarks), x in Dynkin labels of the whole algebra (only the labels of the
+    /// factor matter). Example: D4 at rho = (3, 2, 1, 0) in the e-coordinates gives 0; at omega_4 + rho gives 105/16.
+    /// Throws <see cref="ExactArgumentException"/> when the factor is not of type D.
+    /// </summary>
+    /// <param name="component">Zero-based simple factor, of type D.</param>
+    /// <param name="point">x in Dynkin labels, one per node of the whole algebra.</param>
+    public Rational Pfaffian(int component, Weight point)
+    {
+        CheckPfaffianComponent(component);
+        var labels = point.Labels;
+        if (labels.Length != System.Rank)
+        {
+            throw new ExactArgumentException($"The point {point} has {labels.Length} labels, but {System.Type} has rank {System.Rank}.", nameof(point));
+        }
+
+        return PfaffianCore(component, Restrict(component, labels));
+    }
+
+    /// <summary>
+    /// The eigenvalue on V(lambda) of the degree-n Pfaffian Casimir of a factor of type D_n: Pf(lambda + rho) - Pf(rho),
+    /// which equals Pf(lambda + rho) since Pf(rho) = 0 (see <see cref="Pfaffian"/>). It changes sign when the Dynkin
+    /// labels of nodes n - 1 and n are exchanged, so it separates the two half-spin representations. Throws
+    /// <see cref="ExactArgumentException"/> when the factor is not of type D.
+    /// </summary>
+    /// <param name="representation">V(lambda), a representation of <see cref="System"/>.</param>
+    /// <param name="component">Zero-based simple factor, of type D.</param>
+    public Rational PfaffianEigenvalue(IrreducibleRepresentation representation, int component)
+    {
+        CheckRepresentation(representation);
+        CheckPfaffianComponent(component);
+        return PfaffianEigenvalueCore(representation, component);
+    }
+
+    internal Rational PfaffianEigenvalueCore(IrreducibleRepresentation representation, int component)
+    {
+        var shifted = Restrict(component, representation.Labels);
+        for (var i = 0; i < shifted.Length; i++)
+        {
+            shifted[i]++;
+        }
+
+        var rho = Enumerable.Repeat(1, shifted.Length).ToArray();
+        return PfaffianCore(component, shifted) - PfaffianCore(component, rho);
+    }
+
     /// <summary>The normalisation in words: the reference of each factor and the independent degrees.</summary>
     public string Convention => string.Join("; ", Enumerable.Range(0, References.Count).Select(c =>
     {
@@ -187,9 +257,18 @@ public sealed class CasimirInvariants
             missing.Remove(d);
         }
 
+        var pfaffian = string.Empty;
+        if (_pfaffianIndependent.Value[c] && _pfaffianAxes[c] is { } axes)
+        {
+            missing.Remove(axes.Length);
+            pfaffian = $"; degree {axes.Length} also from the Pfaffian Pf(x) = (x, e_1) ... (x, e_{axes.Length}) (Bourbaki's orthonormal e_i, "
+                + $"omega_{axes.Length} = (e_1 + ... + e_{axes.Length})/2), acting as Pf(lambda + rho)";
+        }
+
         return $"{System.Components[c].Type}: C_k acts on V(lambda) as P_k(lambda + rho) - P_k(rho), P_k(x) = sum of (mu, x)^k over the weights mu of "
             + $"the {r.Dimension} = {r.HighestWeight}; independent degrees {string.Join(", ", _independent.Value[c])}"
-            + (missing.Count == 0 ? " (all basic degrees)" : $"; basic degree(s) {string.Join(", ", missing)} not reached by these power sums");
+            + pfaffian
+            + (missing.Count == 0 ? " (all basic degrees)" : $"; basic degree(s) {string.Join(", ", missing)} not reached");
     }));
 
     /// <inheritdoc />
@@ -240,6 +319,135 @@ public sealed class CasimirInvariants
         return new Rational(sum, BigInteger.Pow(geometry.GramScale, degree));
     }
 
+    /// <summary>
+    /// Bourbaki's orthonormal e_1, ..., e_n of a D_n factor as Dynkin labels (null for other families): e_n = omega_n -
+    /// omega_(n-1), then e_i = e_(i+1) + alpha_i going down (alpha_i = e_i - e_(i+1)). Every label is an integer.
+    /// </summary>
+    private static int[][]? PfaffianAxes(RootSystem simple)
+    {
+        if (simple.Type.Components[0].Family != CartanFamily.D)
+        {
+            return null;
+        }
+
+        var n = simple.Rank;
+        var cartan = simple.CartanMatrix;
+        var axes = new int[n][];
+        axes[n - 1] = new int[n];
+        axes[n - 1][n - 1] = 1;
+        axes[n - 1][n - 2] = -1;
+        for (var i = n - 2; i >= 0; i--)
+        {
+            // alpha_i in Dynkin labels is column i of the Cartan matrix (A_ji = <alpha_j^vee, alpha_i>).
+            axes[i] = new int[n];
+            for (var j = 0; j < n; j++)
+            {
+                axes[i][j] = axes[i + 1][j] + (int)cartan[j, i].Numerator;
+            }
+        }
+
+        return axes;
+    }
+
+    private Rational PfaffianCore(int component, int[] x)
+    {
+        var geometry = _geometries[component];
+        var axes = _pfaffianAxes[component]!;
+        var product = BigInteger.One;
+        foreach (var axis in axes)
+        {
+            product *= geometry.ScaledInnerProduct(axis, x);
+        }
+
+        return new Rational(product, BigInteger.Pow(geometry.GramScale, axes.Length));
+    }
+
+    private int FindRankWithPfaffian(int component)
+    {
+        // Rank of the Jacobian of the independent power sums together with the Pfaffian, at the same point as
+        // FindIndependentDegrees; d Pf / d x_j = sum_i (e_i, omega_j) prod_(k != i) (x, e_k), all scaled by the Gram denominator.
+        var geometry = _geometries[component];
+        var rank = geometry.Rank;
+        var point = JacobianPoint(rank);
+        var rows = _independent.Value[component].Select(d => GradientModPrime(component, d, point)).ToList();
+        var prime = new BigInteger(JacobianPrime);
+        var axes = _pfaffianAxes[component]!;
+        var values = axes.Select(a => new BigInteger(geometry.ScaledInnerProduct(a, point))).ToArray();
+        var gradient = new long[rank];
+        var unit = new int[rank];
+        for (var j = 0; j < rank; j++)
+        {
+            unit[j] = 1;
+            var sum = BigInteger.Zero;
+            for (var i = 0; i < axes.Length; i++)
+            {
+                var term = new BigInteger(geometry.ScaledInnerProduct(axes[i], unit));
+                for (var k = 0; k < axes.Length; k++)
+                {
+                    if (k != i)
+                    {
+                        term = term * values[k] % prime;
+                    }
+                }
+
+                sum += term;
+            }
+
+            unit[j] = 0;
+            gradient[j] = (long)(((sum % prime) + prime) % prime);
+        }
+
+        rows.Add(gradient);
+        return RankModPrime(rows, rank);
+    }
+
+    private static int RankModPrime(List<long[]> rows, int columns)
+    {
+        var pivots = new List<(int Column, long[] Row)>();
+        foreach (var original in rows)
+        {
+            var row = (long[])original.Clone();
+            foreach (var (column, pivotRow) in pivots)
+            {
+                if (row[column] != 0)
+                {
+                    var factor = MulMod(row[column], InverseMod(pivotRow[column]));
+                    for (var j = 0; j < columns; j++)
+                    {
+                        row[j] = SubMod(row[j], MulMod(factor, pivotRow[j]));
+                    }
+                }
+            }
+
+            var pivot = Array.FindIndex(row, v => v != 0);
+            if (pivot >= 0)
+            {
+                pivots.Add((pivot, row));
+            }
+        }
+
+        return pivots.Count;
+    }
+
+    private static int[] JacobianPoint(int rank)
+    {
+        // A fixed pseudo-random point keeps the answer reproducible; the Jacobian of independent polynomials vanishes only
+        // on a hypersurface, which integer coordinates up to 10^6 avoid except by a negligible chance.
+        var random = new Random(20261202);
+        return Enumerable.Range(0, rank).Select(_ => random.Next(1, 1_000_000)).ToArray();
+    }
+
+    private void CheckPfaffianComponent(int component)
+    {
+        CheckComponent(component);
+        if (_pfaffianAxes[component] is null)
+        {
+            throw new ExactArgumentException(
+                $"Component {component} of {System.Type} is {System.Components[component].Type}: the Pfaffian invariant exists only for type D.",
+                nameof(component));
+        }
+    }
+
     private const long JacobianPrime = (1L << 61) - 1;
 
     private int[] FindIndependentDegrees(int component)
@@ -247,10 +455,7 @@ public sealed class CasimirInvariants
         var geometry = _geometries[component];
         var rank = geometry.Rank;
 
-        // A fixed pseudo-random point keeps the answer reproducible; the Jacobian of independent polynomials vanishes only
-        // on a hypersurface, which integer coordinates up to 10^6 avoid except by a negligible chance.
-        var random = new Random(20261202);
-        var point = Enumerable.Range(0, rank).Select(_ => random.Next(1, 1_000_000)).ToArray();
+        var point = JacobianPoint(rank);
         var kept = new List<int>();
         var pivots = new List<(int Column, long[] Row)>();
         foreach (var degree in System.Components[component].Degrees.Distinct())

@@ -116,10 +116,12 @@ public sealed partial class IrreducibleRepresentation
     public Rational HigherCasimir(int degree) => CasimirInvariants.Of(System).Eigenvalue(this, degree);
 
     /// <summary>
-    /// The eigenvalues of the Casimirs at the basic degrees of a simple algebra (exponents + 1, ascending; a degree that occurs
-    /// twice, as n for D_n with n even, is listed once), normalised as in <see cref="HigherCasimir"/>. Throws
-    /// <see cref="ExactArgumentException"/> for a semisimple algebra that is not simple (use <see cref="CasimirInvariants"/>
-    /// per component).
+    /// The eigenvalues of the Casimirs at the basic degrees of a simple algebra, one entry per basic degree (exponents + 1,
+    /// ascending, with multiplicity, so there are rank-many entries), normalised as in <see cref="HigherCasimir"/>. For D_n
+    /// the degree-n entry that the power sums of the vector do not reach is the Pfaffian Casimir
+    /// (<see cref="PfaffianCasimir"/>): for n odd it replaces the power sum of degree n (which vanishes identically), for n
+    /// even it follows the power sum of degree n. Throws <see cref="ExactArgumentException"/> for a semisimple algebra that
+    /// is not simple (use <see cref="CasimirInvariants"/> per component).
     /// </summary>
     public IReadOnlyList<(int Degree, Rational Eigenvalue)> CasimirEigenvalues
     {
@@ -133,7 +135,47 @@ public sealed partial class IrreducibleRepresentation
             }
 
             var invariants = CasimirInvariants.Of(System);
-            return System.Degrees.Distinct().Select(d => (d, invariants.Eigenvalue(this, d))).ToArray();
+            var pfaffianDegree = invariants.PfaffianDegree(0);
+            var independent = invariants.IndependentDegrees(0);
+            var pfaffianListed = false;
+            var seen = new HashSet<int>();
+            var result = new List<(int Degree, Rational Eigenvalue)>();
+            foreach (var degree in System.Degrees)
+            {
+                if (degree == pfaffianDegree && !pfaffianListed && (seen.Contains(degree) || !independent.Contains(degree)))
+                {
+                    result.Add((degree, invariants.PfaffianEigenvalueCore(this, 0)));
+                    pfaffianListed = true;
+                }
+                else if (seen.Add(degree))
+                {
+                    result.Add((degree, invariants.Eigenvalue(this, degree)));
+                }
+            }
+
+            return result;
+        }
+    }
+
+    /// <summary>
+    /// The eigenvalue of the degree-n Pfaffian Casimir of a simple algebra of type D_n on V(lambda): Pf(lambda + rho) with
+    /// Pf(x) = (x, e_1) ... (x, e_n) in Bourbaki's orthonormal coordinates (Plate IV; see <see cref="CasimirInvariants"/>).
+    /// It changes sign when the labels of nodes n - 1 and n are exchanged: the half-spin V(omega_n) of D4 gives 105/16 and
+    /// V(omega_3) gives -105/16. Throws <see cref="ExactArgumentException"/> when the algebra is not simple of type D (use
+    /// <see cref="CasimirInvariants.PfaffianEigenvalue"/> per component of a semisimple algebra).
+    /// </summary>
+    public Rational PfaffianCasimir
+    {
+        get
+        {
+            if (System.Components.Count != 1 || System.Type.Components[0].Family != CartanFamily.D)
+            {
+                throw new ExactArgumentException(
+                    $"The Pfaffian Casimir belongs to a simple algebra of type D; {HighestWeight} is a representation of {System.Type}.",
+                    nameof(PfaffianCasimir));
+            }
+
+            return CasimirInvariants.Of(System).PfaffianEigenvalueCore(this, 0);
         }
     }
 

@@ -45,7 +45,12 @@ public class ComplexifiedTypeBenchmarks
     public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) DenseRandomBasis(string type, int seed)
     {
         var chevalley = ChevalleyBasis.Of(type);
-        var algebra = chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension);
+        return DenseRandomBasis(chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension), seed);
+    }
+
+    /// <summary>The same dense unimodular basis for any algebra.</summary>
+    public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) DenseRandomBasis(LieAlgebra<Rational> algebra, int seed)
+    {
         var random = new Random(seed);
         var n = algebra.Dimension;
         var rows = Enumerable.Range(0, n).Select(i =>

@@ -35,6 +35,21 @@ public class RepresentationDisplayTests
     }
 
     [Fact]
+    public void Half_spin_card_of_D4_shows_the_Pfaffian_Casimir()
+    {
+        // V(omega_4) of so(8): omega_4 + rho = (7/2, 5/2, 3/2, 1/2) in Bourbaki's orthonormal coordinates (Plate IV), so
+        // Pf = 105/16, computed by hand; the other half-spin gives -105/16 (sign change under the node 3-4 exchange).
+        var spinor = IrreducibleRepresentation.Of("D4", 0, 0, 0, 1);
+        Approvals.VerifyAllFormats("Roots_irreducible_D4_half_spin", spinor);
+        var text = MathDisplay.ToPlainText(spinor);
+        Assert.Contains("Pfaffian Casimir (degree 4) = Pf(lambda + rho) = 105/16", text);
+        Assert.Contains("Pfaffian Casimir (degree 4) = Pf(lambda + rho) = -105/16", MathDisplay.ToPlainText(IrreducibleRepresentation.Of("D4", 0, 0, 1, 0)));
+        // so(10) has no Pfaffian among the power sums of its vector but a degree-5 one here; omega_5 + rho gives 945/32 (by hand).
+        Assert.Contains("Pfaffian Casimir (degree 5) = Pf(lambda + rho) = 945/32", MathDisplay.ToPlainText(IrreducibleRepresentation.Of("D5", 0, 0, 0, 0, 1)));
+        Assert.DoesNotContain("Pfaffian", MathDisplay.ToPlainText(IrreducibleRepresentation.Of("B4", 0, 0, 0, 1)));
+    }
+
+    [Fact]
     public void Card_of_the_su3_triplet_shows_its_cubic_Casimir()
     {
         // su(3) on (p, q): C3 proportional to (p - q)(2p + q + 3)(p + 2q + 3) (common practice, from memory); with the 3 as

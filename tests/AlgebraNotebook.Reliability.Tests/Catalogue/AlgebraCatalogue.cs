@@ -110,6 +110,21 @@ public sealed class AlgebraCatalogue(ITestOutputHelper output)
         Entry.Of("family_semidirect_wrong_count", "LieAlgebras.SemidirectSum", "2-dim acting algebra, 1 action matrix", typeof(ExactArgumentException),
             () => LieAlgebras.SemidirectSum(LieAlgebras.GeneralLinear<Rational>(1).DirectSum1(), LieAlgebras.Heisenberg<Rational>(1), [M("[[0, 0, 0], [0, 0, 0], [0, 0, 0]]")]), "2", "1"),
         Entry.Of("chevalley_bad_type", "ChevalleyBasis.Of", "\"X5\"", typeof(ExactArgumentException), () => ChevalleyBasis.Of("X5"), "\"X5\"", "unknown family"),
+        // Only a semisimple algebra has a Cartan type (Humphreys, Introduction to Lie Algebras, 5.1 and 11.4; common practice);
+        // TypeOfComplexification documents ExactArgumentException for one that is not, and BeyondCapabilityException for
+        // structure constants that are not rational. (The zero algebra cannot be built: every constructor needs a basis.)
+        Entry.Of("complexification_solvable", "LieAlgebra<Rational>.TypeOfComplexification", "\"[H, N] = N\" (solvable)", typeof(ExactArgumentException),
+            () => Table("[H, N] = N").TypeOfComplexification(), "dimension 2", "not semisimple"),
+        Entry.Of("complexification_abelian", "LieAlgebra<Rational>.TypeOfComplexification", "\"basis: A, B\" (abelian)", typeof(ExactArgumentException),
+            () => Table("basis: A, B").TypeOfComplexification(), "dimension 2", "not semisimple"),
+        Entry.Of("complexification_nilpotent", "LieAlgebra<Rational>.TypeOfComplexification", "Heisenberg algebra, n = 1", typeof(ExactArgumentException),
+            () => LieAlgebras.Heisenberg<Rational>(1).TypeOfComplexification(), "not semisimple"),
+        Entry.Of("complexification_reductive", "LieAlgebra<Rational>.TypeOfComplexification", "gl(2) (centre of dimension 1)", typeof(ExactArgumentException),
+            () => LieAlgebras.GeneralLinear<Rational>(2).TypeOfComplexification(), "gl(2)", "not semisimple"),
+        Entry.Of("complexification_with_abelian_summand", "LieAlgebra<Rational>.TypeOfComplexification", "sl2 + gl(1)", typeof(ExactArgumentException),
+            () => LieAlgebras.DirectSum(Sl2, LieAlgebras.GeneralLinear<Rational>(1)).TypeOfComplexification(), "not semisimple"),
+        Entry.Of("complexification_not_rational", "LieAlgebra<GaussianRational>.TypeOfComplexification", "\"[H, E] = (2 i) E; [H, F] = (-2 i) F; [E, F] = (-i) H\"", typeof(BeyondCapabilityException),
+            () => LieAlgebra<GaussianRational>.FromCommutatorTable("[H, E] = (2 i) E\n[H, F] = (-2 i) F\n[E, F] = (-i) H").TypeOfComplexification(), "[H, E]", "rational"),
     ];
 
     /// <summary>The case names.</summary>

@@ -70,6 +70,7 @@ public class FormatterApprovalTests
         ("LieAlgebraReport", () => Sl2().Describe()),
         ("FormSignature", () => Sl2().KillingSignature()),
         ("RealFormIdentification", () => Sl2().IdentifyRealForm()),
+        ("ComplexifiedType", () => Sl2().TypeOfComplexification()),
         ("EnvelopingElement", () => CasimirElements.QuadraticCasimir(Sl2())),
         ("CentralityCheck", () => CasimirElements.CheckCentral(UniversalEnvelopingAlgebra<Rational>.Of(Sl2()).Generator("E"))),
         ("RootDecomposition", () => Sl2().RootDecomposition()),
@@ -143,7 +144,6 @@ public class FormatterApprovalTests
     private static readonly Dictionary<string, string> NotMathematics = new(StringComparer.Ordinal)
     {
         ["AlgebraNotebook.Algebras.Chevalley.ChevalleyBasis"] = "a construction object; its ToLieAlgebra() is displayed",
-        ["AlgebraNotebook.Algebras.ComplexifiedType"] = "no converter yet: the default object view lists its type, Cartan matrix and what it rests on; the algebra summary shows the type with that label",
         ["AlgebraNotebook.Algebras.Enveloping.CasimirDegrees"] = "shown inside the algebra report",
         ["AlgebraNotebook.Algebras.Enveloping.PbwMonomial"] = "an index of the PBW basis; elements are displayed",
         ["AlgebraNotebook.Algebras.Enveloping.UniversalEnvelopingAlgebra`1"] = "a factory for elements; its ToString names the basis order",
