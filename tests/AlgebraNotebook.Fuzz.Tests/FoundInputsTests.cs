@@ -86,4 +86,32 @@ public class FoundInputsTests
         Assert.Contains("5.0^339244341", e.Message);
         Assert.Equal(DifferentialOperator<GaussianRational>.Parse(Ring, "625 d_y"), DifferentialOperator<GaussianRational>.Parse(Ring, "5^4 d_y"));
     }
+
+    [Fact]
+    public void A_total_degree_past_the_integer_range_is_a_parse_error_instead_of_a_value_that_does_not_round_trip()
+    {
+        // Found: "(a + b^2147483647)^ 1y^3" (polynomial-rational input 58975 of the long run) printed as
+        // "b^2147483647*y^3 + a*y^3", which parsed back to a different value: the total degree 2147483650 wrapped
+        // around to a negative number, so the graded order sorted the product's terms wrongly.
+        var e = Assert.Throws<ExactParseException>(() => Polynomial<Rational>.Parse("(a + b^2147483647)^ 1y^3"));
+        Assert.Contains("total degree", e.Problem);
+        Assert.Throws<ExactParseException>(() => Polynomial<Rational>.Parse("b^2147483647*y^3 + a*y^3"));
+        Assert.Throws<ExactParseException>(() => Polynomial<GaussianRational>.Parse("b^2147483647 y"));
+        // A power of a single variable costs nothing over Q(i) either (before, its coefficient 1 = 1 + 0 i was charged
+        // one bit per power, so x^2000000 parsed over Q but not over Q(i)).
+        Assert.Equal(1, Polynomial<GaussianRational>.Parse("x^2000000").TermCount);
+        // At the edge of the range the printed text still parses back to the same value.
+        var edge = Polynomial<Rational>.Parse("(a + b^2147483646)^ 1y");
+        Assert.Equal(edge, Polynomial<Rational>.Parse(edge.ToString()));
+        Assert.Equal(int.MaxValue, edge.TotalDegree);
+    }
+
+    [Fact]
+    public void The_first_power_of_a_polynomial_is_the_polynomial_whatever_its_degree()
+    {
+        // p^1 = p (common practice); before, the power estimate refused (a + b^20000)^1 for its degree.
+        var p = Polynomial<Rational>.Parse("a + b^20000");
+        Assert.Equal(p, Polynomial<Rational>.Parse("(a + b^20000)^1"));
+        Assert.Same(p, p.Pow(1));
+    }
 }

@@ -69,8 +69,19 @@ public static class FuzzRunner
     /// <summary>The per-input seed.</summary>
     public static int Mix(int seed, long index) => HashCode.Combine(seed, index, 0x5eed);
 
-    /// <summary>Runs inputs [from, from + count) of a target and returns the figures.</summary>
-    public static FuzzReport Run(FuzzTarget target, int seed, long from, long count, Action<string>? progress = null)
+    /// <summary>
+    /// Runs inputs [from, from + count) of a target and returns the figures. <paramref name="onFailure"/> is called as
+    /// soon as a failure is found (before the run ends), so that a run stopped early still tells what failed.
+    /// </summary>
+    /// <param name="target">The target.</param>
+    /// <param name="seed">The run's seed.</param>
+    /// <param name="from">The first input's index.</param>
+    /// <param name="count">How many inputs.</param>
+    /// <param name="progress">Receives a line every 100 000 inputs, and one line per input slower than <paramref name="slow"/>.</param>
+    /// <param name="onFailure">Receives each failure as it is found.</param>
+    /// <param name="slow">Inputs taking longer than this (wall time) are reported to <paramref name="progress"/>; null for none.</param>
+    public static FuzzReport Run(FuzzTarget target, int seed, long from, long count, Action<string>? progress = null,
+        Action<FuzzFailure>? onFailure = null, TimeSpan? slow = null)
     {
         FuzzReport? report = null;
         Exception? fault = null;
@@ -78,7 +89,7 @@ public static class FuzzRunner
         {
             try
             {
-                report = RunOnThisThread(target, seed, from, count, progress);
+                report = RunOnThisThread(target, seed, from, count, progress, onFailure, slow);
             }
             catch (Exception e)
             {
@@ -90,9 +101,10 @@ public static class FuzzRunner
         return fault is null ? report! : throw new InvalidOperationException($"The fuzz run of {target.Name} failed: {fault.Message}", fault);
     }
 
-    private static FuzzReport RunOnThisThread(FuzzTarget target, int seed, long from, long count, Action<string>? progress)
+    private static FuzzReport RunOnThisThread(FuzzTarget target, int seed, long from, long count, Action<string>? progress,
+        Action<FuzzFailure>? onFailure, TimeSpan? slow)
     {
-        var failures = new List<FuzzFailure>();
+        var failures = new FailureList(onFailure);
         long accepted = 0, refused = 0;
         var slowest = 0L;
         var slowWallOnly = 0;
@@ -140,6 +152,11 @@ public static class FuzzRunner
             var elapsed = Stopwatch.GetTimestamp() - start;
             watchdog.End();
             slowest = Math.Max(slowest, elapsed);
+            if (slow is { } threshold && progress is not null && Stopwatch.GetElapsedTime(start, start + elapsed) > threshold)
+            {
+                progress($"slow input {index}: {Stopwatch.GetElapsedTime(start, start + elapsed).TotalMilliseconds:F0} ms: {target.Show(input)}");
+            }
+
             if (Stopwatch.GetElapsedTime(start, start + elapsed) > HangBound)
             {
                 // On a shared machine wall time includes waiting for a core: run the input again and measure the
@@ -169,6 +186,16 @@ public static class FuzzRunner
 
         return new FuzzReport(target.Name, count, accepted, refused, failures, wall.Elapsed,
             Stopwatch.GetElapsedTime(0, slowest), watchdog.PeakManaged, watchdog.PeakWorkingSet, slowWallOnly);
+    }
+
+    /// <summary>The failures of a run; each one is passed on to the listener as it is added.</summary>
+    private sealed class FailureList(Action<FuzzFailure>? listener) : List<FuzzFailure>
+    {
+        public new void Add(FuzzFailure failure)
+        {
+            base.Add(failure);
+            listener?.Invoke(failure);
+        }
     }
 
     private static TimeSpan CpuTimeOf(FuzzTarget target, object input)

@@ -31,6 +31,9 @@ internal sealed class PolynomialParser<T>
     /// <summary>Largest coefficient, in bits, that a power written in the text may produce.</summary>
     private const long MaxPowerBits = 1 << 20;
 
+    /// <summary>Bits of the coefficient 1 as <see cref="Bits"/> counts them.</summary>
+    private static readonly long OneBits = Bits(Polynomial<T>.One);
+
     private readonly string _text;
     private int _position;
     private int _depth;
@@ -232,7 +235,7 @@ internal sealed class PolynomialParser<T>
         }
         catch (OverflowException)
         {
-            throw new ExactParseException(_text, after, $"the power ^{exponent} makes an exponent larger than {int.MaxValue}");
+            throw new ExactParseException(_text, after, $"the power ^{exponent} makes an exponent or a total degree larger than {int.MaxValue}");
         }
     }
 
@@ -245,7 +248,7 @@ internal sealed class PolynomialParser<T>
         }
         catch (OverflowException)
         {
-            throw new ExactParseException(_text, _position, $"the product makes an exponent larger than {int.MaxValue}");
+            throw new ExactParseException(_text, _position, $"the product makes an exponent or a total degree larger than {int.MaxValue}");
         }
     }
 
@@ -256,8 +259,9 @@ internal sealed class PolynomialParser<T>
             return;
         }
 
-        // Bits beyond those of the coefficient 1 (numerator 1, denominator 1), so powers of x or -x cost nothing.
-        var bits = Math.Max(0, Bits(primary) - 2);
+        // Bits beyond those of the coefficient 1 (over Q numerator 1 and denominator 1; over Q(i) also the imaginary
+        // part 0/1), so powers of x or -x cost nothing over either field.
+        var bits = Math.Max(0, Bits(primary) - OneBits);
         var growth = primary.TermCount == 1 ? bits : bits + Math.Log2(primary.TermCount) + 1;
         var resultBits = exponent * growth;
         if (resultBits > MaxPowerBits)
