@@ -66,8 +66,19 @@ public static class FuzzRunner
     /// <summary>An input still running after this long ends the process with exit code 3 (a real hang).</summary>
     public static readonly TimeSpan HardLimit = TimeSpan.FromSeconds(120);
 
-    /// <summary>The per-input seed.</summary>
-    public static int Mix(int seed, long index) => HashCode.Combine(seed, index, 0x5eed);
+    /// <summary>
+    /// The per-input seed: the SplitMix64 finaliser (Steele, Lea and Flood, "Fast splittable pseudorandom number
+    /// generators", OOPSLA 2014) of the seed and the index, so the same seed and index give the same input in every
+    /// process. (HashCode.Combine, used before, is randomised per process, so input numbers did not reproduce.)
+    /// </summary>
+    public static int Mix(int seed, long index)
+    {
+        var z = unchecked(((ulong)(uint)seed << 32) ^ (ulong)index) + 0x9E3779B97F4A7C15UL;
+        z = unchecked((z ^ (z >> 30)) * 0xBF58476D1CE4E5B9UL);
+        z = unchecked((z ^ (z >> 27)) * 0x94D049BB133111EBUL);
+        z ^= z >> 31;
+        return unchecked((int)z ^ (int)(z >> 32));
+    }
 
     /// <summary>
     /// Runs inputs [from, from + count) of a target and returns the figures. <paramref name="onFailure"/> is called as
