@@ -114,4 +114,31 @@ public class FoundInputsTests
         Assert.Equal(p, Polynomial<Rational>.Parse("(a + b^20000)^1"));
         Assert.Same(p, p.Pow(1));
     }
+
+    [Fact]
+    public void A_long_nested_bracket_of_one_word_parses_to_its_single_Lyndon_basis_element()
+    {
+        // [X, [X, ... [X, Y]]] with 20 brackets is the standard bracketing of the Lyndon word X^20 Y (Reutenauer, Free
+        // Lie Algebras, section 5.1), so it is one basis element with coefficient 1. Found while measuring the fuzz run's
+        // memory: the inner brackets of degree up to 13, of degree + 1 words each, were projected through a dense array
+        // with a slot for every word of their degree (3^13 = 1 594 323 at degree 13), 137 MB allocated for the text.
+        var lie = new FreeLieAlgebra("X", "Y", "Z");
+        var text = string.Concat(Enumerable.Repeat("[X, ", 20)) + "Y" + new string(']', 20);
+        var element = lie.Parse(text);
+        var (word, coefficient) = Assert.Single(element.Terms);
+        Assert.Equal(21, word.Degree);
+        Assert.Equal(Rational.One, coefficient);
+    }
+
+    [Fact]
+    public void A_power_refused_by_the_power_limits_names_the_text()
+    {
+        // Found: "(a^2147483647 + b)^3 - c" (polynomial-rational input 3843 of the 2026-12-02 re-run): the refusal by
+        // Pow's PowerLimits estimate quoted the polynomial "(a^2147483647 + b)^3", not the text.
+        var e = Assert.Throws<BeyondCapabilityException>(() => Polynomial<Rational>.Parse("(a^2147483647 + b)^3 - c"));
+        Assert.Contains("\"(a^2147483647 + b)^3 - c\"", e.Message);
+        Assert.Contains("PowerLimits", e.Message);
+        var g = Assert.Throws<BeyondCapabilityException>(() => Polynomial<GaussianRational>.Parse("(a + bnull^21474836x7)^3 - c"));
+        Assert.Contains("\"(a + bnull^21474836x7)^3 - c\"", g.Message);
+    }
 }
