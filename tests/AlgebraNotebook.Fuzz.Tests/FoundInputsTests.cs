@@ -141,4 +141,24 @@ public class FoundInputsTests
         var g = Assert.Throws<BeyondCapabilityException>(() => Polynomial<GaussianRational>.Parse("(a + bnull^21474836x7)^3 - c"));
         Assert.Contains("\"(a + bnull^21474836x7)^3 - c\"", g.Message);
     }
+
+    [Fact]
+    public void A_coefficient_too_long_to_print_quickly_is_refused_naming_the_text()
+    {
+        // Found: "(x + i y3953123872204132567414/152781768116319540713737349890813^08890)(x - i y)" (polynomial-gaussian
+        // input 317875 of the 2026-12-02 re-run) parsed in 70 ms, but its 950 000-bit coefficients took 49 s to print, so
+        // the round trip ran past the 120 s limit; the same number over Q took 26 s to print.
+        const string gaussian = "(x + i y3953123872204132567414/152781768116319540713737349890813^08890)(x - i y)";
+        var e = Assert.Throws<BeyondCapabilityException>(() => Polynomial<GaussianRational>.Parse(gaussian));
+        Assert.Contains(gaussian, e.Message);
+        Assert.Contains("bits", e.Message);
+        Assert.Throws<BeyondCapabilityException>(() => Polynomial<Rational>.Parse("J_x J_y3953123872204132567414/152781768116319540713737349890813^08890 - J_y J_x"));
+        // Products and divisions are held to the same coefficient size as powers.
+        var big = "1" + new string('0', 3999);
+        Assert.Throws<BeyondCapabilityException>(() => Polynomial<Rational>.Parse(string.Join(" * ", Enumerable.Repeat(big, 6)) + " x"));
+        Assert.Throws<BeyondCapabilityException>(() => Polynomial<Rational>.Parse("x" + string.Concat(Enumerable.Repeat("/" + big, 6))));
+        // 2^60000 (60 001 bits) is within the limit; its last digit is 6, as for every 2^(4k) with k > 0 (common practice).
+        var power = Polynomial<Rational>.Parse("2^60000 x");
+        Assert.EndsWith("6*x", power.ToString());
+    }
 }

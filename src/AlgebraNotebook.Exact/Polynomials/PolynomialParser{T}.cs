@@ -31,8 +31,12 @@ internal sealed class PolynomialParser<T>
     /// refused. Table: tests/AlgebraNotebook.Fuzz/README.md, "Work budgets".</remarks>
     private const long MaxWork = 100_000;
 
-    /// <summary>Largest coefficient, in bits, that a power written in the text may produce.</summary>
-    private const long MaxPowerBits = 1 << 20;
+    /// <summary>
+    /// Largest coefficient, in bits (numerators and denominators together), that a power, product or division written
+    /// in the text may produce. Printing a number takes time quadratic in its length: a coefficient of 950 000 bits
+    /// (152781768116319540713737349890813^8890, admitted by the earlier limit of 2^20 bits) took 26 s to print.
+    /// </summary>
+    private const long MaxPowerBits = 1 << 16;
 
     /// <summary>Bits of the coefficient 1 as <see cref="Bits"/> counts them.</summary>
     private static readonly long OneBits = Bits(Polynomial<T>.One);
@@ -172,6 +176,7 @@ internal sealed class PolynomialParser<T>
                     throw new ExactParseException(_text, divisorStart, "division by zero");
                 }
 
+                CheckCoefficientBits(Bits(result) + Bits(divisor), "the division");
                 result /= divisor.ConstantTerm;
             }
             else if (char.IsLetter(c) || c == '(')
@@ -249,6 +254,7 @@ internal sealed class PolynomialParser<T>
 
     private Polynomial<T> Multiply(Polynomial<T> left, Polynomial<T> right)
     {
+        CheckCoefficientBits(Bits(left) + Bits(right), "the product");
         Charge((double)left.TermCount * right.TermCount * (2 + (Bits(left) + Bits(right)) / 64.0));
         try
         {
@@ -286,6 +292,14 @@ internal sealed class PolynomialParser<T>
         // The expansion has at most C(e + t - 1, t - 1) terms; squaring costs about terms^2 coefficient products.
         var terms = Math.Min(1e18, Binomial(exponent + primary.TermCount - 1, primary.TermCount - 1));
         Charge(terms * terms * (1 + resultBits / 64) / 2);
+    }
+
+    private void CheckCoefficientBits(long bits, string what)
+    {
+        if (bits > MaxPowerBits)
+        {
+            throw Beyond($"{what} would make coefficients of about {bits:N0} bits (at most {MaxPowerBits:N0} allowed)");
+        }
     }
 
     private void Charge(double work)
