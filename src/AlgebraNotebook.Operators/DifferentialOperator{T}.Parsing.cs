@@ -224,9 +224,10 @@ public sealed partial class DifferentialOperator<T>
 
         private static long Bits(T number) => number switch
         {
-            Rational r => r.Numerator.GetBitLength() + r.Denominator.GetBitLength(),
-            GaussianRational g => g.Real.Numerator.GetBitLength() + g.Real.Denominator.GetBitLength()
-                                  + g.Imaginary.Numerator.GetBitLength() + g.Imaginary.Denominator.GetBitLength(),
+            // Magnitudes: GetBitLength of a negative number counts two's-complement bits (0 for -1).
+            Rational r => System.Numerics.BigInteger.Abs(r.Numerator).GetBitLength() + r.Denominator.GetBitLength(),
+            GaussianRational g => System.Numerics.BigInteger.Abs(g.Real.Numerator).GetBitLength() + g.Real.Denominator.GetBitLength()
+                                  + System.Numerics.BigInteger.Abs(g.Imaginary.Numerator).GetBitLength() + g.Imaginary.Denominator.GetBitLength(),
             _ => 64,
         };
 

@@ -161,4 +161,18 @@ public class FoundInputsTests
         var power = Polynomial<Rational>.Parse("2^60000 x");
         Assert.EndsWith("6*x", power.ToString());
     }
+
+    [Fact]
+    public void A_huge_power_of_a_negative_fraction_is_refused_instead_of_running_for_minutes()
+    {
+        // Found: "(1/ - 2 i)^2147483647z x" (polynomial-gaussian input 430126 of the 2026-12-02 re-run) ran for more than
+        // 120 s: the size estimate read the numerator -1 as 0 bits, so -i/2 looked as cheap to raise as 1.
+        const string text = "(1/ - 2 i)^2147483647z x";
+        var e = Assert.Throws<BeyondCapabilityException>(() => Polynomial<GaussianRational>.Parse(text));
+        Assert.Contains(text, e.Message);
+        Assert.Throws<BeyondCapabilityException>(() => Polynomial<Rational>.Parse("(-1/2)^2147483647 x"));
+        // (-1/2)^3 = -1/8 (common practice); small powers of negative fractions still parse.
+        Assert.Equal(Polynomial<Rational>.Parse("-1/8 x"), Polynomial<Rational>.Parse("(-1/2)^3 x"));
+        Assert.Equal(Polynomial<GaussianRational>.Parse("i/8"), Polynomial<GaussianRational>.Parse("(-i/2)^3"));
+    }
 }

@@ -343,7 +343,9 @@ internal sealed class PolynomialParser<T>
             long bits = 0;
             foreach (var part in parts)
             {
-                bits += part.Numerator.GetBitLength() + part.Denominator.GetBitLength();
+                // Magnitudes: GetBitLength of a negative number counts two's-complement bits, 0 for -1, so -1/2 would
+                // have looked like 1 and (-1/2)^2147483647 would have been admitted as free.
+                bits += System.Numerics.BigInteger.Abs(part.Numerator).GetBitLength() + part.Denominator.GetBitLength();
             }
 
             largest = Math.Max(largest, bits);
