@@ -66,11 +66,33 @@ public static class FuzzRunner
     /// <summary>An input still running after this long ends the process with exit code 3 (a real hang).</summary>
     public static readonly TimeSpan HardLimit = TimeSpan.FromSeconds(120);
 
-    /// <summary>The per-input seed.</summary>
-    public static int Mix(int seed, long index) => HashCode.Combine(seed, index, 0x5eed);
+    /// <summary>
+    /// The per-input seed: the SplitMix64 finaliser (Steele, Lea and Flood, "Fast splittable pseudorandom number
+    /// generators", OOPSLA 2014) of the seed and the index, so the same seed and index give the same input in every
+    /// process. (HashCode.Combine, used before, is randomised per process, so input numbers did not reproduce.)
+    /// </summary>
+    public static int Mix(int seed, long index)
+    {
+        var z = unchecked(((ulong)(uint)seed << 32) ^ (ulong)index) + 0x9E3779B97F4A7C15UL;
+        z = unchecked((z ^ (z >> 30)) * 0xBF58476D1CE4E5B9UL);
+        z = unchecked((z ^ (z >> 27)) * 0x94D049BB133111EBUL);
+        z ^= z >> 31;
+        return unchecked((int)z ^ (int)(z >> 32));
+    }
 
-    /// <summary>Runs inputs [from, from + count) of a target and returns the figures.</summary>
-    public static FuzzReport Run(FuzzTarget target, int seed, long from, long count, Action<string>? progress = null)
+    /// <summary>
+    /// Runs inputs [from, from + count) of a target and returns the figures. <paramref name="onFailure"/> is called as
+    /// soon as a failure is found (before the run ends), so that a run stopped early still tells what failed.
+    /// </summary>
+    /// <param name="target">The target.</param>
+    /// <param name="seed">The run's seed.</param>
+    /// <param name="from">The first input's index.</param>
+    /// <param name="count">How many inputs.</param>
+    /// <param name="progress">Receives a line every 100 000 inputs, and one line per input slower than <paramref name="slow"/>.</param>
+    /// <param name="onFailure">Receives each failure as it is found.</param>
+    /// <param name="slow">Inputs taking longer than this (wall time) are reported to <paramref name="progress"/>; null for none.</param>
+    public static FuzzReport Run(FuzzTarget target, int seed, long from, long count, Action<string>? progress = null,
+        Action<FuzzFailure>? onFailure = null, TimeSpan? slow = null)
     {
         FuzzReport? report = null;
         Exception? fault = null;
@@ -78,7 +100,7 @@ public static class FuzzRunner
         {
             try
             {
-                report = RunOnThisThread(target, seed, from, count, progress);
+                report = RunOnThisThread(target, seed, from, count, progress, onFailure, slow);
             }
             catch (Exception e)
             {
@@ -90,9 +112,10 @@ public static class FuzzRunner
         return fault is null ? report! : throw new InvalidOperationException($"The fuzz run of {target.Name} failed: {fault.Message}", fault);
     }
 
-    private static FuzzReport RunOnThisThread(FuzzTarget target, int seed, long from, long count, Action<string>? progress)
+    private static FuzzReport RunOnThisThread(FuzzTarget target, int seed, long from, long count, Action<string>? progress,
+        Action<FuzzFailure>? onFailure, TimeSpan? slow)
     {
-        var failures = new List<FuzzFailure>();
+        var failures = new FailureList(onFailure);
         long accepted = 0, refused = 0;
         var slowest = 0L;
         var slowWallOnly = 0;
@@ -140,6 +163,11 @@ public static class FuzzRunner
             var elapsed = Stopwatch.GetTimestamp() - start;
             watchdog.End();
             slowest = Math.Max(slowest, elapsed);
+            if (slow is { } threshold && progress is not null && Stopwatch.GetElapsedTime(start, start + elapsed) > threshold)
+            {
+                progress($"slow input {index}: {Stopwatch.GetElapsedTime(start, start + elapsed).TotalMilliseconds:F0} ms: {target.Show(input)}");
+            }
+
             if (Stopwatch.GetElapsedTime(start, start + elapsed) > HangBound)
             {
                 // On a shared machine wall time includes waiting for a core: run the input again and measure the
@@ -169,6 +197,16 @@ public static class FuzzRunner
 
         return new FuzzReport(target.Name, count, accepted, refused, failures, wall.Elapsed,
             Stopwatch.GetElapsedTime(0, slowest), watchdog.PeakManaged, watchdog.PeakWorkingSet, slowWallOnly);
+    }
+
+    /// <summary>The failures of a run; each one is passed on to the listener as it is added.</summary>
+    private sealed class FailureList(Action<FuzzFailure>? listener) : List<FuzzFailure>
+    {
+        public new void Add(FuzzFailure failure)
+        {
+            base.Add(failure);
+            listener?.Invoke(failure);
+        }
     }
 
     private static TimeSpan CpuTimeOf(FuzzTarget target, object input)

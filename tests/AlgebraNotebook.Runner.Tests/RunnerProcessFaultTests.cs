@@ -119,4 +119,38 @@ public class RunnerProcessFaultTests
         Assert.Equal(before, File.ReadAllBytes(path));
         Assert.False(File.Exists(Path.Combine(temp.Folder, "wait.html")));
     }
+
+    [Fact]
+    public void Ctrl_c_ends_a_long_representation_computation_that_takes_the_cells_cancellation_token()
+    {
+        // The dominant weights of the E8 representation with Dynkin labels (2, ..., 2) take more than 25 s; the library
+        // checks the token in its loops. The bound below is a liveness bound for a loaded machine, not the speed target
+        // (measured figures: README, Reliability).
+        using var temp = new TempNotebook();
+        var started = Path.Combine(temp.Folder, "started.txt");
+        var path = temp.WriteIpynb("e8.ipynb",
+            ("code", $"System.IO.File.WriteAllText(\"{Escaped(started)}\", \"x\");\n"
+                     + "IrreducibleRepresentation.Of(\"E8\", 2, 2, 2, 2, 2, 2, 2, 2)\n"
+                     + "    .ComputeDominantWeights(long.MaxValue, Microsoft.DotNet.Interactive.KernelInvocationContext.Current.CancellationToken).Count", "csharp"));
+        var before = File.ReadAllBytes(path);
+
+        var stderr = new System.Text.StringBuilder();
+        using var runner = StartRunner(stderr, "run", path, "--in-place");
+        WaitFor(started, runner, stderr);
+        Thread.Sleep(TimeSpan.FromSeconds(3));
+        Assert.False(runner.HasExited, "The computation ended before the interrupt.");
+        var watch = Stopwatch.StartNew();
+        using (var kill = Process.Start("kill", ["-INT", runner.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)]))
+        {
+            kill.WaitForExit();
+        }
+
+        Assert.True(runner.WaitForExit(TimeSpan.FromSeconds(10)), "The runner did not end within 10 s of Ctrl+C.");
+        watch.Stop();
+        runner.WaitForExit();
+        Console.WriteLine($"Ctrl+C to exit during the E8 computation: {watch.Elapsed.TotalSeconds:F2} s");
+        Assert.Equal(RunnerApp.ExitInterrupted, runner.ExitCode);
+        Assert.Equal(before, File.ReadAllBytes(path));
+        Assert.False(File.Exists(Path.Combine(temp.Folder, "e8.html")));
+    }
 }

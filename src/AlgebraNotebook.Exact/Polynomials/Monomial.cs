@@ -6,6 +6,8 @@ namespace AlgebraNotebook.Exact.Polynomials;
 /// <summary>
 /// A power product x1^e1 ... xk^ek of symbols with positive exponents; immutable and canonical
 /// (factors sorted by <see cref="Symbol.Compare"/>, i.e. by name, no zero exponents). The empty product is <see cref="One"/>.
+/// Every exponent and the total degree fit in an <see cref="int"/>: building a monomial whose exponents or total degree
+/// would exceed <see cref="int.MaxValue"/> throws <see cref="OverflowException"/> (the parsers report it as a parse error).
 /// </summary>
 public sealed class Monomial : IEquatable<Monomial>
 {
@@ -21,7 +23,9 @@ public sealed class Monomial : IEquatable<Monomial>
         var hash = 17;
         for (var k = 0; k < symbols.Length; k++)
         {
-            degree += exponents[k];
+            // Checked: a wrapped-around total degree would break the graded orders (a product of sorted terms would come
+            // out unsorted, so equal polynomials would compare unequal).
+            degree = checked(degree + exponents[k]);
             hash = unchecked((hash * 31 + symbols[k].Id) * 31 + exponents[k]);
         }
 

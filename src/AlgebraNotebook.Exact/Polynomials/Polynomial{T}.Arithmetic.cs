@@ -125,10 +125,11 @@ public sealed partial class Polynomial<T>
     /// The polynomial to a non-negative integer power, refused before any work when the result's estimated size exceeds
     /// <paramref name="limits"/>: the number of terms is at most the number of multisets of size <paramref name="exponent"/>
     /// drawn from the polynomial's terms, and at most the number of monomials of the result's total degree or less.
-    /// A single term is always raised directly (its cost is one scalar power).
+    /// A single term is always raised directly (its cost is one scalar power), and p^1 is p itself, whatever its size.
     /// </summary>
     /// <exception cref="ExactArgumentException">The exponent is negative, or <paramref name="limits"/> is invalid.</exception>
     /// <exception cref="BeyondCapabilityException">The estimated result exceeds <paramref name="limits"/>; the message gives the estimate.</exception>
+    /// <exception cref="OverflowException">An exponent or the total degree of the result would exceed <see cref="int.MaxValue"/>.</exception>
     public Polynomial<T> Pow(int exponent, PowerLimits limits)
     {
         ArgumentNullException.ThrowIfNull(limits);
@@ -137,6 +138,11 @@ public sealed partial class Polynomial<T>
         {
             throw new ExactArgumentException(
                 $"Exponent {exponent} is negative; polynomials have only non-negative integer powers (polynomial {this}).", nameof(exponent));
+        }
+
+        if (exponent == 1)
+        {
+            return this;
         }
 
         if (_monomials.Length == 1)

@@ -178,7 +178,9 @@ public sealed partial class FreeLieAlgebra : IEquatable<FreeLieAlgebra>
             var degree = group.Key;
             var size = (double)Math.Pow(Alphabet.Count, degree);
             bool ok;
-            if (size <= DenseProjectionLimit)
+            // The dense array has one entry per word of the degree (k^degree); a sparse element, such as the expansion
+            // of [X, [X, ... [X, Y]]] with degree + 1 words, goes to the sparse variant instead of allocating it.
+            if (size <= DenseProjectionLimit && (size <= DenseAlwaysBelow || group.Count() * DenseMinimumFill >= size))
             {
                 var dense = new Rational[(int)size];
                 foreach (var (w, c) in group)
@@ -205,6 +207,12 @@ public sealed partial class FreeLieAlgebra : IEquatable<FreeLieAlgebra>
 
     /// <summary>Words per degree up to which projection works on a dense array.</summary>
     internal const int DenseProjectionLimit = 1 << 22;
+
+    /// <summary>Words per degree below which the dense array is used whatever the fill.</summary>
+    internal const int DenseAlwaysBelow = 1 << 12;
+
+    /// <summary>Above <see cref="DenseAlwaysBelow"/>, the dense array is used when at least one word in this many occurs.</summary>
+    internal const int DenseMinimumFill = 16;
 
     private void AppendBracketing(StringBuilder builder, LyndonWord word)
     {

@@ -74,6 +74,11 @@ internal sealed class LieTextReader(string text)
     }
 
     /// <summary>Work budget of one parse (see <see cref="Charge"/>).</summary>
+    /// <remarks>Measured (Release, processor time, best of 3, 2026-12-02, generators X, Y, Z): the slowest admitted
+    /// input of the families tried is the alternating bracket [X, [Y, [X, ... Z]]] with 13 brackets, about 0.18 s and
+    /// 85 MB allocated; [X, [X, ... [X, Y]]] is admitted up to 20 brackets (3 ms); a sum of 3 771 degree-9 brackets
+    /// (159 000 characters) takes 0.5 s. Table:
+    /// tests/AlgebraNotebook.Fuzz/README.md, "Work budgets".</remarks>
     public const double MaxWork = 1 << 22;
 
     private double work;
