@@ -20,6 +20,16 @@ public sealed record RealFormIdentification(
     /// <summary>The dimension of a maximal compact subalgebra k in a Cartan decomposition g = k ⊕ p (negative squares of K).</summary>
     public int CompactDimension => KillingSignature.Negative;
 
-    /// <summary>Plain text: "su(2,1) (complexification A2, Killing signature (4, 4, 0))".</summary>
-    public override string ToString() => $"{Name} (complexification {ComplexificationType}, Killing signature {KillingSignature})";
+    /// <summary>
+    /// Null when <see cref="ComplexificationType"/> was proved exactly by a root decomposition split over Q or Q(i);
+    /// otherwise what it rests on (<see cref="ComplexifiedType.RestsOn"/>: roots computed modulo two primes). The Killing
+    /// signature is exact either way.
+    /// </summary>
+    public string? TypeRestsOn { get; init; }
+
+    /// <summary>Plain text: "su(2,1) (complexification A2, Killing signature (4, 4, 0))", followed by what the type rests
+    /// on when it was not proved exactly.</summary>
+    public override string ToString() =>
+        $"{Name} (complexification {ComplexificationType}, Killing signature {KillingSignature})"
+        + (TypeRestsOn is null ? string.Empty : $"; complexification type: {TypeRestsOn}");
 }

@@ -175,7 +175,9 @@ public static class RealLieAlgebras
     /// </summary>
     /// <exception cref="ExactArgumentException">The algebra is not simple over the reals.</exception>
     /// <exception cref="BeyondCapabilityException">The complexification is not split over Q(i) with the Cartan subalgebra
-    /// found, or no listed real form fits (both would indicate a limit of the search, the message says which).</exception>
+    /// found and <see cref="LieAlgebra{T}.TypeOfComplexification"/> (used then, and named in
+    /// <see cref="RealFormIdentification.TypeRestsOn"/>) does not reach the type either, or no listed real form fits (both
+    /// would indicate a limit of the search, the message says which).</exception>
     public static RealFormIdentification IdentifyRealForm(this LieAlgebra<Rational> algebra)
     {
         ArgumentNullException.ThrowIfNull(algebra);
@@ -192,9 +194,24 @@ public static class RealLieAlgebras
             RootDecomposition<GaussianRational> complex => (complex.IsSplit, complex.Type, complex.Note),
             _ => throw new InvalidOperationException("Unexpected root decomposition type."),
         };
+        string? restsOn = null;
         if (!isSplit || splitType is null)
         {
-            throw new BeyondCapabilityException($"The complexification of {algebra.Label} could not be split over Q(i): {note}");
+            // No split Cartan subalgebra visible over Q(i): the type of the complexification from roots modulo primes,
+            // carried with what it rests on.
+            ComplexifiedType complexified;
+            try
+            {
+                complexified = algebra.TypeOfComplexification();
+            }
+            catch (BeyondCapabilityException e)
+            {
+                throw new BeyondCapabilityException(
+                    $"The complexification of {algebra.Label} could not be split over Q(i) ({note}), and its type modulo primes was not reached either: {e.Message}");
+            }
+
+            splitType = complexified.Type;
+            restsOn = complexified.RestsOn;
         }
 
         var type = splitType;
@@ -217,7 +234,7 @@ public static class RealLieAlgebras
                 $"No listed real form of {type} has a maximal compact subalgebra of dimension {k} (Killing signature {signature}).");
         }
 
-        return new RealFormIdentification(string.Join(" or ", candidates), candidates, type, signature);
+        return new RealFormIdentification(string.Join(" or ", candidates), candidates, type, signature) { TypeRestsOn = restsOn };
     }
 
     private static string ComplexName(SimpleCartanType x) => x.Family switch

@@ -130,6 +130,29 @@ public class ComplexifiedTypeTests(ITestOutputHelper output)
     }
 
     [Fact]
+    public void Real_form_and_casimir_degrees_of_a_dense_basis_rest_on_the_complexified_type()
+    {
+        // The Chevalley basis spans the split real form: for B2 that is so(3,2) = sp(4,R), maximal compact subalgebra
+        // so(3) + so(2) of dimension 4 (Helgason, ch. X, Table V, from memory), so the Killing signature is (6, 4, 0).
+        // Degrees of the basic invariants of W(B2): 2, 4 (Humphreys, Reflection Groups and Coxeter Groups, 3.7 Table 1).
+        var algebra = DenseBasisChange.Disguise(Chevalley("B2"), seed: 3);
+        var split = algebra.Complexify().RootDecomposition().IsSplit;
+        var realForm = algebra.IdentifyRealForm();
+        var degrees = AlgebraNotebook.Algebras.Enveloping.CasimirElements.BasicInvariantDegrees(algebra);
+        output.WriteLine(realForm.ToString());
+        output.WriteLine(degrees.ToString());
+        Assert.Contains("so(3,2)", realForm.Candidates);
+        Assert.Equal(CartanType.Parse("B2"), realForm.ComplexificationType);
+        Assert.Equal(4, realForm.CompactDimension);
+        Assert.Equal([2, 4], degrees.Degrees);
+        // This basis hides every split Cartan subalgebra (the summary test above relies on the same seed): the type then
+        // comes from the roots modulo primes, and both answers say so.
+        Assert.False(split);
+        Assert.Contains("modulo", realForm.TypeRestsOn);
+        Assert.Contains("modulo", degrees.Statement);
+    }
+
+    [Fact]
     public void Non_rational_structure_constants_are_refused_with_the_bracket_named()
     {
         // sl(2) over Q(i) in the basis i e_1, e_2, e_3 has brackets with coefficient ±i (common practice: rescaling a basis element scales its brackets).

@@ -142,17 +142,20 @@ public static class CasimirElements
     /// <param name="algebra">A semisimple Lie algebra.</param>
     /// <exception cref="ExactArgumentException">The algebra is not semisimple (the message gives the radical dimension of
     /// the Killing form).</exception>
-    /// <exception cref="BeyondCapabilityException">The root decomposition could not be reached over the field.</exception>
+    /// <exception cref="BeyondCapabilityException">Neither a split root decomposition (over the field, or over Q(i) for a
+    /// real algebra) nor <see cref="LieAlgebra{T}.TypeOfComplexification"/> reached the type; when only the latter did,
+    /// the statement says what the type rests on.</exception>
     public static CasimirDegrees BasicInvariantDegrees<T>(LieAlgebra<T> algebra)
         where T : IFieldElement<T>
     {
         ArgumentNullException.ThrowIfNull(algebra);
         InverseForm(algebra, algebra.KillingForm(), "Killing form", nameof(algebra));
-        var type = IdentifyType(algebra);
+        var (type, restsOn) = IdentifyType(algebra);
         var system = RootSystem.Of(type);
         var degrees = system.Degrees;
         var statement = $"degrees of the basic invariants of the Weyl group of type {type} (exponents + 1), Chevalley's theorem: "
-            + $"the centre of U(g) over C is a polynomial algebra on {degrees.Count} Casimir elements of these degrees";
+            + $"the centre of U(g) over C is a polynomial algebra on {degrees.Count} Casimir elements of these degrees"
+            + (restsOn is null ? string.Empty : $"; the type rests on: {restsOn}");
         return new CasimirDegrees(type, degrees, statement);
     }
 
@@ -191,34 +194,45 @@ public static class CasimirElements
         return scalar;
     }
 
-    internal static CartanType IdentifyType<T>(LieAlgebra<T> algebra)
+    // The type over C, proved by a split root decomposition (rests-on text null), or else from
+    // TypeOfComplexification (roots modulo primes) with the text saying so.
+    internal static (CartanType Type, string? RestsOn) IdentifyType<T>(LieAlgebra<T> algebra)
         where T : IFieldElement<T>
     {
         if (algebra is LieAlgebra<Rational> realAlgebra && realAlgebra.HasComplexRootDecomposition(out var known) && known.IsSplit && known.Type is not null)
         {
             // Already computed for the summary or the real-form name: the type over C is the same.
-            return known.Type;
+            return (known.Type, null);
         }
 
         var roots = algebra.RootDecomposition();
         if (roots.IsSplit && roots.Type is not null)
         {
-            return roots.Type;
+            return (roots.Type, null);
         }
 
+        var note = roots.Note;
         if (algebra is LieAlgebra<Rational> real)
         {
             var complex = real.ComplexifyCached().RootDecomposition();
             if (complex.IsSplit && complex.Type is not null)
             {
-                return complex.Type;
+                return (complex.Type, null);
             }
 
-            throw new BeyondCapabilityException(
-                $"The Cartan type of {algebra.Label} was not reached even after complexification: {complex.Note}");
+            note = $"{note}; after complexification: {complex.Note}";
         }
 
-        throw new BeyondCapabilityException($"The Cartan type of {algebra.Label} was not reached: {roots.Note}");
+        try
+        {
+            var complexified = algebra.TypeOfComplexification();
+            return (complexified.Type, complexified.RestsOn);
+        }
+        catch (BeyondCapabilityException e)
+        {
+            throw new BeyondCapabilityException(
+                $"The Cartan type of {algebra.Label} was not reached: no split Cartan subalgebra ({note}), and its type modulo primes was not reached either: {e.Message}");
+        }
     }
 
     private static Matrix<T> InverseForm<T>(LieAlgebra<T> algebra, Matrix<T> form, string formName, string parameter)

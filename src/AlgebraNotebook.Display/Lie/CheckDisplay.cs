@@ -17,7 +17,7 @@ internal static class CheckDisplay
 {
     /// <summary>
     /// A fact table: the real-form name, the other names of the same real form when there are several, the type of the
-    /// complexification, the Killing signature (positive, negative, zero) and the dimension of a maximal compact subalgebra.
+    /// complexification (and what it rests on when it was not proved exactly), the Killing signature (positive, negative, zero) and the dimension of a maximal compact subalgebra.
     /// </summary>
     public static MathNode FromRealForm(RealFormIdentification identification)
     {
@@ -31,6 +31,11 @@ internal static class CheckDisplay
         }
 
         rows.Add(new[] { MathNodes.Text("complexification type"), CartanTypeDisplay.ToTree(identification.ComplexificationType) });
+        if (identification.TypeRestsOn is { } restsOn)
+        {
+            rows.Add(new[] { MathNodes.Text("type rests on"), MathNodes.Text(restsOn) });
+        }
+
         rows.Add(new[] { MathNodes.Text("Killing signature"), AlgebraDisplay.FromSignature(identification.KillingSignature) });
         rows.Add(new[] { MathNodes.Text("maximal compact subalgebra dimension"), MathNodes.Integer(identification.CompactDimension) });
         return new MatrixNode(rows, FenceKind.Brackets);

@@ -75,8 +75,10 @@ internal static partial class FieldRoots
 
         g[d] = GaussianInteger.One;
 
-        // Cauchy's bound for a monic polynomial: |y| <= 1 + max |g_k|, so each component of a root is within it.
-        var bound = BigInteger.One + g.Take(d).Select(c => IntegerFactoring.IntegerRoot(c.Norm, 2) + 1).Max();
+        // Cauchy's bound on f: a root x has |x| <= 1 + max |a_k| / |a_d| (k < d), so y = a_d x has |y| <= |a_d| + max |a_k|,
+        // and each component of y is within it. (Cauchy's bound on the monic g, 1 + max |g_k|, is about |a_d|^(d-1)
+        // times larger and made the lifting run to thousands of digits for degree-20 characteristic polynomials.)
+        var bound = IntegerFactoring.IntegerRoot(leading.Norm, 2) + 1 + f.Take(d).Select(c => IntegerFactoring.IntegerRoot(c.Norm, 2) + 1).Max();
         var derivative = Enumerable.Range(1, d).Select(k => new GaussianInteger(g[k].Real * k, g[k].Imaginary * k)).ToArray();
 
         for (var p = 3; p <= LiftingPrimeBound; p += 4)
@@ -159,10 +161,33 @@ internal static partial class FieldRoots
     // (a + b i)^-1 = (a - b i) / (a^2 + b^2); the norm is a unit modulo p^k because a + b i is a unit modulo p.
     private static GaussianInteger Inverse(GaussianInteger z, BigInteger p, BigInteger modulus)
     {
-        var norm = BigInteger.Remainder(z.Norm, modulus);
-        var phi = modulus - modulus / p;
-        var normInverse = BigInteger.ModPow(norm, phi - 1, modulus);
+        var normInverse = UnitInverse(z.Norm, p, modulus);
         return Reduce(new GaussianInteger(z.Real * normInverse, -z.Imaginary * normInverse), modulus);
+    }
+
+    /// <summary>
+    /// The inverse of n modulo a power <paramref name="modulus"/> of the prime p, for n a unit modulo p: Fermat's inverse
+    /// modulo p, then Newton's iteration x &lt;- x (2 - n x), which doubles the exponent of p each step (common practice,
+    /// Hensel lifting). Euler's x = n^(phi - 1) with phi of the size of the modulus took minutes at thousands of digits.
+    /// </summary>
+    internal static BigInteger UnitInverse(BigInteger n, BigInteger p, BigInteger modulus)
+    {
+        var x = BigInteger.ModPow(Positive(n, p), p - 2, p);
+        var m = p;
+        while (m < modulus)
+        {
+            m = BigInteger.Min(m * m, modulus);
+            var reduced = Positive(n, m);
+            x = Positive(x * (2 - (reduced * x)), m);
+        }
+
+        return x;
+    }
+
+    private static BigInteger Positive(BigInteger value, BigInteger modulus)
+    {
+        var r = BigInteger.Remainder(value, modulus);
+        return r.Sign < 0 ? r + modulus : r;
     }
 
     private static GaussianInteger EvaluateModulo(GaussianInteger[] coefficients, GaussianInteger x, BigInteger modulus)
