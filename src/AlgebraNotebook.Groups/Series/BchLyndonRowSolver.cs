@@ -64,30 +64,13 @@ internal static class BchLyndonRowSolver
         var n = table.Length;
         var words = table.Words;
         var coefficients = new Rational[words.Length];
-        BigInteger factorial = 1;
-        BigInteger lcm = 1;
-        for (var i = 2; i <= n; i++)
-        {
-            factorial *= i;
-            lcm = lcm / BigInteger.GreatestCommonDivisor(lcm, i) * i;
-        }
+        var (factorial, lcm) = BchWordCoefficients.Scales(n);
 
         var scale = factorial * lcm;
         var quotients = BchWordCoefficients.LcmQuotients(n);
 
         // Multidegrees by the number of 1-bits; each list is in increasing word order.
-        var groups = new List<int>[n + 1];
-        for (var k = 0; k <= n; k++)
-        {
-            groups[k] = [];
-        }
-
-        foreach (var code in words)
-        {
-            groups[BitOperations.PopCount((uint)code)].Add(code);
-        }
-
-        var order = Enumerable.Range(0, n + 1).Where(k => groups[k].Count > 0).OrderByDescending(k => groups[k].Count).ToArray();
+        var (groups, order) = table.ClassesByOnes();
         var narrow = new long[words.Length];
         var wide = new Lazy<Int128[]>(() => new Int128[words.Length]);
         var failed = 0;

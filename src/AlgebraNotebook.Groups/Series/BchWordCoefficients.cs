@@ -30,14 +30,7 @@ internal static class BchWordCoefficients
     /// <summary>n! lcm(1..n) as the common scale of the degree-n word coefficients.</summary>
     public static BigInteger Scale(int n)
     {
-        BigInteger factorial = 1;
-        BigInteger lcm = 1;
-        for (var i = 2; i <= n; i++)
-        {
-            factorial *= i;
-            lcm = lcm / BigInteger.GreatestCommonDivisor(lcm, i) * i;
-        }
-
+        var (factorial, lcm) = Scales(n);
         return factorial * lcm;
     }
 
@@ -75,6 +68,20 @@ internal static class BchWordCoefficients
         {
             return ScaledBig(runs[..runCount], n, transitions, lcm, factorial);
         }
+    }
+
+    /// <summary>n! and lcm(1..n): their product scales every word coefficient of degree n to an integer.</summary>
+    public static (BigInteger Factorial, BigInteger Lcm) Scales(int n)
+    {
+        BigInteger factorial = 1;
+        BigInteger lcm = 1;
+        for (var i = 2; i <= n; i++)
+        {
+            factorial *= i;
+            lcm = lcm / BigInteger.GreatestCommonDivisor(lcm, i) * i;
+        }
+
+        return (factorial, lcm);
     }
 
     /// <summary>lcm(1..n) / (j + 1) for j = 0..n-1, the weights of the integral in <see cref="TryScaledCoefficient"/>.</summary>

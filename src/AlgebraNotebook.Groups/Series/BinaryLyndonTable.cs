@@ -77,6 +77,27 @@ internal sealed class BinaryLyndonTable
 
     public bool IsLyndon(int code) => (_bits[code >> 6] & (1UL << (code & 63))) != 0;
 
+    /// <summary>
+    /// The words by multidegree (number of 1-bits k), each list in increasing word order, and the non-empty k ordered by
+    /// decreasing class size (largest first, for parallel scheduling).
+    /// </summary>
+    public (List<int>[] Classes, int[] Order) ClassesByOnes()
+    {
+        var classes = new List<int>[Length + 1];
+        for (var k = 0; k <= Length; k++)
+        {
+            classes[k] = [];
+        }
+
+        foreach (var code in Words)
+        {
+            classes[BitOperations.PopCount((uint)code)].Add(code);
+        }
+
+        var order = Enumerable.Range(0, Length + 1).Where(k => classes[k].Count > 0).OrderByDescending(k => classes[k].Count).ToArray();
+        return (classes, order);
+    }
+
     /// <summary>The position of a Lyndon word in <see cref="Words"/>.</summary>
     public int Rank(int code) =>
         _blockRanks[code >> 6] + BitOperations.PopCount(_bits[code >> 6] & ((1UL << (code & 63)) - 1));
