@@ -9,7 +9,11 @@ namespace AlgebraNotebook.Algebras.Tests;
 /// </summary>
 internal static class DenseBasisChange
 {
-    public static LieAlgebra<Rational> Disguise(LieAlgebra<Rational> algebra, int seed)
+    public static LieAlgebra<Rational> Disguise(LieAlgebra<Rational> algebra, int seed) =>
+        algebra.InBasis(Basis(algebra, seed), label: $"{algebra.Label} in a dense random basis (seed {seed})");
+
+    /// <summary>The new basis itself (the benchmarks link this file and rebuild a fresh algebra from it per iteration).</summary>
+    public static List<LieElement<Rational>> Basis(LieAlgebra<Rational> algebra, int seed)
     {
         var random = new Random(seed);
         var n = algebra.Dimension;
@@ -35,7 +39,6 @@ internal static class DenseBasisChange
             }
         }
 
-        var basis = rows.OrderBy(_ => random.Next()).Select(v => algebra.Element(v.Select(c => (Rational)c).ToArray())).ToList();
-        return algebra.InBasis(basis, label: $"{algebra.Label} in a dense random basis (seed {seed})");
+        return rows.OrderBy(_ => random.Next()).Select(v => algebra.Element(v.Select(c => (Rational)c).ToArray())).ToList();
     }
 }

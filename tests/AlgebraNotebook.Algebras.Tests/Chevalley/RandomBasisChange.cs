@@ -18,7 +18,11 @@ internal static class RandomBasisChange
         return Disguise(algebra, chevalley.System.Rank, seed);
     }
 
-    public static LieAlgebra<Rational> Disguise(LieAlgebra<Rational> algebra, int rank, int seed)
+    public static LieAlgebra<Rational> Disguise(LieAlgebra<Rational> algebra, int rank, int seed) =>
+        algebra.InBasis(Basis(algebra, rank, seed), label: $"{algebra.Label} in a random basis (seed {seed})");
+
+    /// <summary>The new basis itself (the benchmarks link this file and rebuild a fresh algebra from it per iteration).</summary>
+    public static List<LieElement<Rational>> Basis(LieAlgebra<Rational> algebra, int rank, int seed)
     {
         var random = new Random(seed);
         var n = algebra.Dimension;
@@ -70,7 +74,6 @@ internal static class RandomBasisChange
             }
         }
 
-        var shuffled = vectors.OrderBy(_ => random.Next()).Select(v => algebra.Element(v)).ToList();
-        return algebra.InBasis(shuffled, label: $"{algebra.Label} in a random basis (seed {seed})");
+        return vectors.OrderBy(_ => random.Next()).Select(v => algebra.Element(v)).ToList();
     }
 }

@@ -1,5 +1,6 @@
 using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Algebras.Chevalley;
+using AlgebraNotebook.Algebras.Tests;
 using AlgebraNotebook.Exact.Scalars;
 using BenchmarkDotNet.Attributes;
 
@@ -40,7 +41,7 @@ public class ComplexifiedTypeBenchmarks
 
     /// <summary>
     /// The Chevalley algebra and a dense unimodular basis: identity rows changed by two sweeps of random transvections
-    /// (row i += ±row j), then shuffled.
+    /// (row i += ±row j), then shuffled (DenseBasisChange).
     /// </summary>
     public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) DenseRandomBasis(string type, int seed)
     {
@@ -48,31 +49,7 @@ public class ComplexifiedTypeBenchmarks
         return DenseRandomBasis(chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension), seed);
     }
 
-    /// <summary>The same dense unimodular basis for any algebra.</summary>
-    public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) DenseRandomBasis(LieAlgebra<Rational> algebra, int seed)
-    {
-        var random = new Random(seed);
-        var n = algebra.Dimension;
-        var rows = Enumerable.Range(0, n).Select(i =>
-        {
-            var v = new long[n];
-            v[i] = 1;
-            return v;
-        }).ToArray();
-        for (var sweep = 0; sweep < 2; sweep++)
-        {
-            for (var i = 0; i < n; i++)
-            {
-                var j = (i + 1 + random.Next(n - 1)) % n;
-                var c = random.Next(2) == 0 ? -1 : 1;
-                for (var k = 0; k < n; k++)
-                {
-                    rows[i][k] += c * rows[j][k];
-                }
-            }
-        }
-
-        var basis = rows.OrderBy(_ => random.Next()).Select(v => algebra.Element(v.Select(c => (Rational)c).ToArray())).ToList();
-        return (algebra, basis);
-    }
+    /// <summary>The same dense unimodular basis for any algebra: the Algebras tests' DenseBasisChange, linked into this project.</summary>
+    public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) DenseRandomBasis(LieAlgebra<Rational> algebra, int seed) =>
+        (algebra, DenseBasisChange.Basis(algebra, seed));
 }
