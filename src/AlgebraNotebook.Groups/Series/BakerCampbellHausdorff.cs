@@ -11,9 +11,9 @@ namespace AlgebraNotebook.Groups.Series;
 /// basis of the free Lie algebra, to a chosen degree N. Results are <see cref="LieSeries"/> with truncation order N + 1.
 /// </summary>
 /// <remarks>
-/// Default method for log(e^x e^y) with two generators: <see cref="BakerCampbellHausdorffMethod.WordCoefficientRows"/>
-/// (coefficients of Lyndon words from their runs, then a triangular solve on Lyndon words only, row by row; see the
-/// enum). The
+/// Default method for log(e^x e^y) with two generators: <see cref="BakerCampbellHausdorffMethod.DualBasis"/>
+/// (each Lyndon coordinate as a pairing with the dual basis, by recurrences on Lyndon factorisations, exact through
+/// modular arithmetic with a proved bound; see the enum). The
 /// other entry points, and <see cref="BakerCampbellHausdorffMethod.AssociativeLogarithm"/> (the reference variant):
 /// (1) in the free associative algebra truncated after degree N, stored densely per degree, form the product
 /// of the truncated exponentials and its logarithm sum (-1)^(m+1) u^m / m with u = product - 1 as the right factor
@@ -29,7 +29,7 @@ public static class BakerCampbellHausdorff
     /// <exception cref="ExactArgumentException">Degree below 1.</exception>
     /// <exception cref="BeyondCapabilityException">The degree exceeds the size cap (the message gives the estimated size).</exception>
     public static LieSeries Series(int degree, SeriesLimits? limits = null) =>
-        Series(new FreeLieAlgebra("X", "Y"), "X", "Y", degree, BakerCampbellHausdorffMethod.WordCoefficientRows, limits);
+        Series(new FreeLieAlgebra("X", "Y"), "X", "Y", degree, BakerCampbellHausdorffMethod.DualBasis, limits);
 
     /// <summary>log(e^X e^Y) to degree N on generators X &lt; Y, by a chosen method (both give the same series).</summary>
     /// <exception cref="ExactArgumentException">Degree below 1 or an unknown method.</exception>
@@ -41,7 +41,7 @@ public static class BakerCampbellHausdorff
     /// <exception cref="ExactArgumentException">Degree below 1 or an unknown generator.</exception>
     /// <exception cref="BeyondCapabilityException">The degree exceeds the cap.</exception>
     public static LieSeries Series(FreeLieAlgebra algebra, string x, string y, int degree, SeriesLimits? limits = null) =>
-        Series(algebra, x, y, degree, BakerCampbellHausdorffMethod.WordCoefficientRows, limits);
+        Series(algebra, x, y, degree, BakerCampbellHausdorffMethod.DualBasis, limits);
 
     /// <summary>
     /// log(e^x e^y) to degree N for two generators of a free Lie algebra, by a chosen method. The word-coefficient
@@ -79,8 +79,20 @@ public static class BakerCampbellHausdorff
                 }
 
                 break;
+            case BakerCampbellHausdorffMethod.DualBasis when x != y:
+                (limits ?? SeriesLimits.Default).CheckWordCoefficientDegree(what, degree);
+                var id = algebra.Alphabet.IndexOf(x);
+                var jd = algebra.Alphabet.IndexOf(y);
+                var dualTerms = BchDualBasisSolver.TrySolve(degree, Math.Min(id, jd), Math.Max(id, jd), firstIsSmall: id < jd);
+                if (dualTerms is not null)
+                {
+                    return LieSeries.FromSortedTerms(algebra, dualTerms, degree + 1);
+                }
+
+                break;
             case BakerCampbellHausdorffMethod.WordCoefficients:
             case BakerCampbellHausdorffMethod.WordCoefficientRows:
+            case BakerCampbellHausdorffMethod.DualBasis:
             case BakerCampbellHausdorffMethod.AssociativeLogarithm:
                 break;
             default:

@@ -1,0 +1,158 @@
+using System.Numerics;
+using System.Text;
+
+namespace AlgebraNotebook.Groups.Series;
+
+/// <summary>
+/// Upper bounds on |c_l| for every degree, for <see cref="BchDualBasisSolver"/>: the recurrences of
+/// <see cref="PairingTables{T}"/> run in <see cref="MagnitudeBound"/> arithmetic (absolute values of the constants) on
+/// classes of words instead of words. The table of a class (length m, x letters X) bounds, entry by entry, the
+/// absolute values of the tables of all its Lyndon words: the operations are monotone in non-negative inputs, a chain
+/// step maps class (m, x) to (m + 1, x + 1), and each root contributes the product of its factors' class bounds (with
+/// 1/e! only for a factor repeated as the same word). Distinct factor patterns are few, so this costs far less than a
+/// pass over words.
+/// </summary>
+internal static class DualBasisBound
+{
+    /// <summary>Bound on max |c_l| over Lyndon words l of each length 1..N (index 0 unused).</summary>
+    public static double[] Largest(BchDualBasisPlan plan)
+    {
+        var n = plan.Degree;
+        var tables = new PairingTables<MagnitudeBound>(plan);
+        var s = tables.NewScratch();
+        var bound = new MagnitudeBound[]?[n + 1][];
+        var largest = new double[n + 1];
+        for (var m = 1; m <= n; m++)
+        {
+            bound[m] = new MagnitudeBound[]?[m + 1];
+        }
+
+        // Length 1: X (coefficient 1, never a factor, no chain) and Y (t_Y(0, 1) = 1).
+        largest[1] = 1;
+        bound[1][0] = [tables.One];
+
+        var patterns = RootPatterns(plan);
+        for (var m = 2; m <= n; m++)
+        {
+            var wantTable = m < n;
+            for (var x = 1; x < m; x++)
+            {
+                MagnitudeBound[]? table = null;
+                var previous = bound[m - 1][x - 1];
+                if (previous is not null)
+                {
+                    PairingTables<MagnitudeBound>.Load(previous, m - 1, x - 1, s);
+                    Absorb(ref table, ref largest[m], tables.Derive(m, x, s, wantTable), s, m, x, wantTable);
+                }
+
+                foreach (var pattern in patterns[m][x] ?? [])
+                {
+                    var rows = 0;
+                    var columns = 0;
+                    foreach (var (length, factorX, power) in pattern)
+                    {
+                        for (var e = 0; e < power; e++)
+                        {
+                            if (columns == 0)
+                            {
+                                PairingTables<MagnitudeBound>.Load(bound[length][factorX]!, length, factorX, s);
+                            }
+                            else
+                            {
+                                PairingTables<MagnitudeBound>.Multiply(rows, columns, bound[length][factorX]!, length, factorX, s);
+                            }
+
+                            rows += factorX;
+                            columns += length;
+                        }
+
+                        if (power > 1)
+                        {
+                            tables.DivideByFactorial(rows, columns, power, s);
+                        }
+                    }
+
+                    Absorb(ref table, ref largest[m], tables.Derive(m, x, s, wantTable), s, m, x, wantTable);
+                }
+
+                bound[m][x] = table;
+            }
+        }
+
+        return largest;
+    }
+
+    // Folds one derived table and coefficient bound into the class maxima.
+    private static void Absorb(ref MagnitudeBound[]? table, ref double largest, MagnitudeBound c, PairingTables<MagnitudeBound>.Scratch s, int m, int x, bool wantTable)
+    {
+        largest = Math.Max(largest, c.Value);
+        if (!wantTable)
+        {
+            return;
+        }
+
+        var size = PairingTables<MagnitudeBound>.TableSize(m, x);
+        if (table is null)
+        {
+            table = s.Table.AsSpan(0, size).ToArray();
+            return;
+        }
+
+        for (var i = 0; i < size; i++)
+        {
+            if (s.Table[i].Value > table[i].Value)
+            {
+                table[i] = s.Table[i];
+            }
+        }
+    }
+
+    // The distinct factor patterns (factor length, letters X, repetition of the same word) of the roots, by class.
+    private static List<(int Length, int X, int Power)[]>?[][] RootPatterns(BchDualBasisPlan plan)
+    {
+        var n = plan.Degree;
+        var patterns = new List<(int, int, int)[]>?[n + 1][];
+        Span<int> starts = stackalloc int[n + 1];
+        var key = new StringBuilder();
+        for (var m = 1; m <= n; m++)
+        {
+            patterns[m] = new List<(int, int, int)[]>?[m + 1];
+            var seen = new HashSet<string>();
+            foreach (var code in m >= 3 ? plan.Roots(m) : [])
+            {
+                var length = m - 1;
+                var rest = code & ((1 << length) - 1);
+                var count = BchDualBasisPlan.LyndonFactorisation(rest, length, starts);
+                var groups = new List<(int, int, int)>();
+                for (var f = 0; f < count;)
+                {
+                    var factor = BchDualBasisPlan.Factor(rest, length, starts, f);
+                    var factorLength = starts[f + 1] - starts[f];
+                    var power = 1;
+                    while (f + power < count && starts[f + power + 1] - starts[f + power] == factorLength &&
+                           BchDualBasisPlan.Factor(rest, length, starts, f + power) == factor)
+                    {
+                        power++;
+                    }
+
+                    groups.Add((factorLength, factorLength - BitOperations.PopCount((uint)factor), power));
+                    f += power;
+                }
+
+                var x = m - BitOperations.PopCount((uint)code);
+                key.Clear().Append(x).Append(':');
+                foreach (var (a, b, c) in groups)
+                {
+                    key.Append(a).Append(',').Append(b).Append(',').Append(c).Append(';');
+                }
+
+                if (seen.Add(key.ToString()))
+                {
+                    (patterns[m][x] ??= []).Add(groups.ToArray());
+                }
+            }
+        }
+
+        return patterns;
+    }
+}

@@ -1,0 +1,30 @@
+using AlgebraNotebook.Exact.Scalars;
+
+namespace AlgebraNotebook.Groups.Series;
+
+/// <summary>
+/// The arithmetic one pass of <see cref="DualBasisPass{T}"/> runs in: residues of rationals modulo a few primes
+/// (<see cref="ResiduePair{TPrimes}"/>), or upper bounds on absolute values (<see cref="MagnitudeBound"/>). The pass
+/// only adds and multiplies, so the same code computes either.
+/// </summary>
+internal interface IPassArithmetic<T>
+    where T : struct, IPassArithmetic<T>
+{
+    /// <summary>The image of 0.</summary>
+    static abstract T Zero { get; }
+
+    /// <summary>The image of a rational constant of the pass (its denominator has only primes below 2^30).</summary>
+    static abstract T FromRational(Rational value);
+
+    /// <summary>The image of a + b.</summary>
+    static abstract T Add(T a, T b);
+
+    /// <summary>The image of a b.</summary>
+    static abstract T Multiply(T a, T b);
+
+    /// <summary>The image of sum + a b.</summary>
+    static abstract T MultiplyAdd(T sum, T a, T b);
+
+    /// <summary>True for the image of 0 (a zero bound, or all residues zero).</summary>
+    bool IsZero { get; }
+}
