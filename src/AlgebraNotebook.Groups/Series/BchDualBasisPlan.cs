@@ -74,20 +74,20 @@ internal sealed class BchDualBasisPlan
             throw new InvalidOperationException("The letter X was marked as a factor.");
         }
 
-        (Alpha, Bernoulli, Inverses, InverseFactorials, RowZero) = Constants(degree);
+        (Alpha, Bernoulli, Binomials, InverseFactorials, RowZero) = Constants(degree);
     }
 
     /// <summary>N.</summary>
     public int Degree { get; }
 
-    /// <summary>(-1)^a / (a + 1), a = 0..N: the coefficients of (1 - e^(-s)) / s times a!.</summary>
+    /// <summary>(-1)^a / (a + 1)!, a = 0..N: the coefficients of (1 - e^(-s)) / s.</summary>
     public Rational[] Alpha { get; }
 
     /// <summary>B+_j, j = 0..N: the Bernoulli numbers with B+_1 = +1/2 (s / (1 - e^(-s)) = sum of B+_j s^j / j!).</summary>
     public Rational[] Bernoulli { get; }
 
-    /// <summary>1 / i, i = 1..N + 1 (index 0 holds 0).</summary>
-    public Rational[] Inverses { get; }
+    /// <summary>Binomials[a][i] = C(a + i, i) for a, i = 0..N.</summary>
+    public Rational[][] Binomials { get; }
 
     /// <summary>1 / e!, e = 0..N.</summary>
     public Rational[] InverseFactorials { get; }
@@ -171,19 +171,31 @@ internal sealed class BchDualBasisPlan
 
     private static int Letter(int code, int length, int position) => (code >> (length - 1 - position)) & 1;
 
-    private static (Rational[] Alpha, Rational[] Bernoulli, Rational[] Inverses, Rational[] InverseFactorials, Rational[][] RowZero) Constants(int n)
+    private static (Rational[] Alpha, Rational[] Bernoulli, Rational[][] Binomials, Rational[] InverseFactorials, Rational[][] RowZero) Constants(int n)
     {
         var alpha = new Rational[n + 1];
-        var inverses = new Rational[n + 2];
-        var factorials = new Rational[n + 1];
+        var factorials = new Rational[n + 2];
         var inverseFactorials = new Rational[n + 1];
         factorials[0] = 1;
+        for (var i = 1; i <= n + 1; i++)
+        {
+            factorials[i] = factorials[i - 1] * i;
+        }
+
         for (var i = 0; i <= n; i++)
         {
-            alpha[i] = new Rational(i % 2 == 0 ? 1 : -1, i + 1);
-            inverses[i + 1] = new Rational(1, i + 1);
-            factorials[i] = i == 0 ? 1 : factorials[i - 1] * i;
+            alpha[i] = (i % 2 == 0 ? 1 : -1) / factorials[i + 1];
             inverseFactorials[i] = 1 / factorials[i];
+        }
+
+        var binomials = new Rational[n + 1][];
+        for (var a = 0; a <= n; a++)
+        {
+            binomials[a] = new Rational[n + 1];
+            for (var i = 0; i <= n; i++)
+            {
+                binomials[a][i] = (a + i <= n + 1 ? factorials[a + i] : Factorial(a + i)) * inverseFactorials[a] * inverseFactorials[i];
+            }
         }
 
         var bernoulli = BernoulliPlus(n);
@@ -199,6 +211,8 @@ internal sealed class BchDualBasisPlan
             }
         }
 
-        return (alpha, bernoulli, inverses, inverseFactorials, rowZero);
+        return (alpha, bernoulli, binomials, inverseFactorials, rowZero);
     }
+
+    private static Rational Factorial(int n) => Enumerable.Range(1, n).Aggregate(Rational.One, (f, i) => f * i);
 }

@@ -20,13 +20,16 @@ namespace AlgebraNotebook.Groups.Series;
 /// <para>
 /// Derivation (ours). Shuffles are dual to the coproduct for which X, Y and Z are primitive, so for any words u, v,
 /// &lt;S_u sh S_v, X^i Z^k&gt; = sum of C(i, i1) C(k, k1) &lt;S_u, X^i1 Z^k1&gt; &lt;S_v, X^(i-i1) Z^(k-k1)&gt;: with
-/// t_w(i, k) = &lt;S_w, X^i Z^k&gt; / (i! k!), shuffles become products of polynomials in two variables. Every Lyndon
+/// t_w(i, k) = &lt;S_w, X^i Z^k&gt; / k! a shuffle is a product, polynomial in k and binomial in i. Every Lyndon
 /// word of length at least 2 starts with X; the left residual X^-1 (dual to prefixing X) gives
 /// X^-1 (X^i Z^k) = X^(i-1) Z^k for i at least 1, and X^-1 Z^k = (X^-1 Z) Z^(k-1). With G = e^X e^Y = e^Z,
 /// X^-1 log G = (X^-1 G) log(G) / (G - 1) and X^-1 G = ((e^X - 1) / X) e^Y = ((1 - e^(-X)) / X) e^Z, so
 /// X^-1 Z = ((1 - e^(-X)) / X) (Z / (1 - e^(-Z))), a product of a series in X and a series in Z whose coefficients are
 /// (-1)^a / (a + 1)! and the Bernoulli numbers B+_j / j! (B+_1 = +1/2). This closes the recurrences of
-/// <see cref="DualBasisPass{T}"/>. Base: t_Y(0, 1) = 1. Checks: c(XY) = 1/2, c(XXY) = c(XYY) = 1/12.
+/// <see cref="DualBasisPass{T}"/>: for l = X l', t_l(i, k) = t_l'(i - 1, k) (i at least 1),
+/// t_l(0, k) = (1/k!) sum over j of B+_(j-k+1) j! / (j-k+1)! u(j) with u(j) = sum over a of (-1)^a / (a + 1)! t_l'(a, j),
+/// and c_l = t_l(0, 1) = sum over j of B+_j u(j); for l' = l1^e1 ... lr^er, t_l' is the shuffle product of the
+/// t_lj^ej / ej!. Base: t_Y(0, 1) = 1. Checks: c(XY) = 1/2, c(XXY) = c(XYY) = 1/12.
 /// </para>
 /// <para>
 /// Exactness. c_l has a denominator dividing D_n = n! lcm(1..n) (n = |l|): the word coefficients of Z of degree n
@@ -52,10 +55,13 @@ internal static class BchDualBasisSolver
     /// </summary>
     public static (LyndonWord Word, Rational Coefficient)[]? TrySolve(int degree, int smallLetter, int largeLetter, bool firstIsSmall, int? threads = null, bool allPrimes = false)
     {
-        var parallelism = threads ?? Environment.ProcessorCount;
+        var parallelism = threads ?? (Environment.GetEnvironmentVariable("BCHT") is { } t ? int.Parse(t) : Environment.ProcessorCount);
+        var sw = System.Diagnostics.Stopwatch.StartNew();
         var plan = new BchDualBasisPlan(degree);
 
+        Console.WriteLine($"T plan {sw.ElapsedMilliseconds}");
         var largest = DualBasisBound.Largest(plan);
+        Console.WriteLine($"T bound {sw.ElapsedMilliseconds}");
         var scales = new BigInteger[degree + 1];
         var bitsNeeded = 0.0;
         for (var n = 1; n <= degree; n++)
@@ -74,6 +80,7 @@ internal static class BchDualBasisSolver
 
         var first = new DualBasisPass<ResiduePair<FirstPrimePair>>(plan);
         first.Run(parallelism);
+        Console.WriteLine($"T pass {sw.ElapsedMilliseconds}");
         var primes = ResiduePair<FirstPrimePair>.Primes.ToList();
         DualBasisPass<ResiduePair<SecondPrimePair>>? second = null;
         if (allPrimes || bitsNeeded >= ProductBits(primes) - 1)
@@ -105,6 +112,7 @@ internal static class BchDualBasisSolver
             offsets[n + 1] = offsets[n] + count;
         }
 
+        Console.WriteLine($"T count {sw.ElapsedMilliseconds}");
         var result = new (LyndonWord Word, Rational Coefficient)[offsets[degree + 1]];
         var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, parallelism) };
         Parallel.For(1, degree + 1, options, n =>
@@ -142,6 +150,7 @@ internal static class BchDualBasisSolver
             }
         });
 
+        Console.WriteLine($"T out {sw.ElapsedMilliseconds}");
         return result;
     }
 

@@ -20,16 +20,16 @@ internal static class DualBasisBound
         var n = plan.Degree;
         var tables = new PairingTables<MagnitudeBound>(plan);
         var s = tables.NewScratch();
-        var bound = new MagnitudeBound[]?[n + 1][];
+        var bound = new MagnitudeBound[][]?[n + 1][];
         var largest = new double[n + 1];
         for (var m = 1; m <= n; m++)
         {
-            bound[m] = new MagnitudeBound[]?[m + 1];
+            bound[m] = new MagnitudeBound[][]?[m + 1];
         }
 
         // Length 1: X (coefficient 1, never a factor, no chain) and Y (t_Y(0, 1) = 1).
         largest[1] = 1;
-        bound[1][0] = [tables.One];
+        bound[1][0] = [[tables.One]];
 
         var patterns = RootPatterns(plan);
         for (var m = 2; m <= n; m++)
@@ -37,12 +37,17 @@ internal static class DualBasisBound
             var wantTable = m < n;
             for (var x = 1; x < m; x++)
             {
-                MagnitudeBound[]? table = null;
+                MagnitudeBound[][]? table = null;
                 var previous = bound[m - 1][x - 1];
                 if (previous is not null)
                 {
-                    PairingTables<MagnitudeBound>.Load(previous, m - 1, x - 1, s);
-                    Absorb(ref table, ref largest[m], tables.Derive(m, x, s, wantTable), s, m, x, wantTable);
+                    var firstRow = new MagnitudeBound[m];
+                    var c = tables.DeriveFromTable(m, x, new PairingTable<MagnitudeBound>(null, previous, 0), s, wantTable ? firstRow : []);
+                    largest[m] = Math.Max(largest[m], c.Value);
+                    if (wantTable)
+                    {
+                        Absorb(ref table, [firstRow, .. previous.Take(x).Select(row => row.ToArray())]);
+                    }
                 }
 
                 foreach (var pattern in patterns[m][x] ?? [])
@@ -51,15 +56,16 @@ internal static class DualBasisBound
                     var columns = 0;
                     foreach (var (length, factorX, power) in pattern)
                     {
+                        var factor = new PairingTable<MagnitudeBound>(null, bound[length][factorX]!, 0);
                         for (var e = 0; e < power; e++)
                         {
                             if (columns == 0)
                             {
-                                PairingTables<MagnitudeBound>.Load(bound[length][factorX]!, length, factorX, s);
+                                PairingTables<MagnitudeBound>.Load(factor, length, factorX, s);
                             }
                             else
                             {
-                                PairingTables<MagnitudeBound>.Multiply(rows, columns, bound[length][factorX]!, length, factorX, s);
+                                tables.Multiply(rows, columns, factor, length, factorX, s);
                             }
 
                             rows += factorX;
@@ -72,7 +78,20 @@ internal static class DualBasisBound
                         }
                     }
 
-                    Absorb(ref table, ref largest[m], tables.Derive(m, x, s, wantTable), s, m, x, wantTable);
+                    var firstRow = new MagnitudeBound[m];
+                    var c = tables.DeriveFromProduct(m, x, s, wantTable ? firstRow : []);
+                    largest[m] = Math.Max(largest[m], c.Value);
+                    if (wantTable)
+                    {
+                        var candidate = new MagnitudeBound[x + 1][];
+                        candidate[0] = firstRow;
+                        for (var i = 1; i <= x; i++)
+                        {
+                            candidate[i] = s.Product.AsSpan(((i - 1) * s.Stride) + 1, m - i).ToArray();
+                        }
+
+                        Absorb(ref table, candidate);
+                    }
                 }
 
                 bound[m][x] = table;
@@ -82,27 +101,23 @@ internal static class DualBasisBound
         return largest;
     }
 
-    // Folds one derived table and coefficient bound into the class maxima.
-    private static void Absorb(ref MagnitudeBound[]? table, ref double largest, MagnitudeBound c, PairingTables<MagnitudeBound>.Scratch s, int m, int x, bool wantTable)
+    // Folds one candidate table into the class maxima, entry by entry.
+    private static void Absorb(ref MagnitudeBound[][]? table, MagnitudeBound[][] candidate)
     {
-        largest = Math.Max(largest, c.Value);
-        if (!wantTable)
-        {
-            return;
-        }
-
-        var size = PairingTables<MagnitudeBound>.TableSize(m, x);
         if (table is null)
         {
-            table = s.Table.AsSpan(0, size).ToArray();
+            table = candidate;
             return;
         }
 
-        for (var i = 0; i < size; i++)
+        for (var i = 0; i < table.Length; i++)
         {
-            if (s.Table[i].Value > table[i].Value)
+            for (var k = 0; k < table[i].Length; k++)
             {
-                table[i] = s.Table[i];
+                if (candidate[i][k].Value > table[i][k].Value)
+                {
+                    table[i][k] = candidate[i][k];
+                }
             }
         }
     }

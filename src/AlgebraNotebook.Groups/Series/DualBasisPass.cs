@@ -5,31 +5,32 @@ namespace AlgebraNotebook.Groups.Series;
 
 /// <summary>
 /// One pass of <see cref="BchDualBasisSolver"/> over all Lyndon words up to length N in the arithmetic
-/// <typeparamref name="T"/>: the tables t_l of <see cref="PairingTables{T}"/> and the Lyndon coordinates c_l.
+/// <typeparamref name="T"/>: the tables of <see cref="PairingTables{T}"/> and the Lyndon coordinates c_l.
 /// </summary>
 /// <remarks>
-/// Order: every Lyndon word l = X l' with l' itself Lyndon is computed right after l' (a chain l', X l', X X l', ...);
-/// the other words (roots: Y, and those whose l' has two or more Lyndon factors) go by length, so the factors they need
-/// are done, and the roots of one length run in parallel. Only the tables that some root uses as a factor are kept
-/// (<see cref="BchDualBasisPlan.KeptSlot"/>); a chain holds just its current table.
+/// Order: every Lyndon word l = X l' with l' itself Lyndon is computed right after l' (a chain l', X l', X X l', ...,
+/// whose members share rows, see <see cref="PairingTable{T}"/>); the first words of chains (roots: Y, and the words
+/// whose l' has two or more Lyndon factors) go by length, so the factors they need are done, and the roots of one
+/// length run in parallel. Only the tables that some root uses as a factor are kept
+/// (<see cref="BchDualBasisPlan.KeptSlot"/>), with the rows they share; the other rows live in per-thread buffers.
 /// </remarks>
 internal sealed class DualBasisPass<T>
     where T : struct, IPassArithmetic<T>
 {
     private readonly BchDualBasisPlan _plan;
     private readonly PairingTables<T> _tables;
-    private readonly T[][][] _kept;
+    private readonly PairingTable<T>[][] _kept;
 
     public DualBasisPass(BchDualBasisPlan plan)
     {
         _plan = plan;
         _tables = new PairingTables<T>(plan);
         var n = plan.Degree;
-        _kept = new T[n + 1][][];
+        _kept = new PairingTable<T>[n + 1][];
         Coefficients = new T[n + 1][];
         for (var m = 1; m <= n; m++)
         {
-            _kept[m] = new T[plan.KeptCount(m)][];
+            _kept[m] = new PairingTable<T>[plan.KeptCount(m)];
             Coefficients[m] = new T[plan.Words(m).Length];
         }
     }
@@ -40,7 +41,6 @@ internal sealed class DualBasisPass<T>
     /// <summary>Runs the pass on up to <paramref name="parallelism"/> threads.</summary>
     public void Run(int parallelism)
     {
-        var n = _plan.Degree;
         var one = _tables.One;
         Coefficients[1][0] = one;
         if (Coefficients[1].Length > 1)
@@ -50,49 +50,71 @@ internal sealed class DualBasisPass<T>
 
         // The chain of Y: t_Y(0, 1) = 1, the coefficient of Y in Z.
         var scratch = _tables.NewScratch();
-        scratch.Table[0] = one;
-        WalkChain(1, 1, 0, scratch);
+        Chain(1, 1, 0, scratch);
 
         var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, parallelism) };
-        var pool = new ConcurrentBag<PairingTables<T>.Scratch>();
-        pool.Add(scratch);
-        for (var m = 3; m <= n; m++)
+        var pool = new ConcurrentBag<PairingTables<T>.Scratch> { scratch };
+        for (var m = 3; m <= _plan.Degree; m++)
         {
             var roots = _plan.Roots(m);
             var length = m;
             Parallel.For(0, roots.Length, options, () => pool.TryTake(out var s) ? s : _tables.NewScratch(), (r, _, s) =>
             {
                 var code = roots[r];
-                var x = ProductOfFactors(code & ((1 << (length - 1)) - 1), length - 1, s) + 1;
-                Coefficients[length][_plan.Rank(length, code)] = _tables.Derive(length, x, s, length < n);
-                WalkChain(length, code, x, s);
+                Chain(length, code, ProductOfFactors(code & ((1 << (length - 1)) - 1), length - 1, s) + 1, s);
                 return s;
             }, pool.Add);
         }
     }
 
-    // From the table of the word (length m, code, x letters X) in s.Table: keeps it if a root needs it, then computes
-    // X^j word for j = 1, 2, ... up to length N (the code of X w is the code of w).
-    private void WalkChain(int m, int code, int x, PairingTables<T>.Scratch s)
+    // A chain from its root (length n0, code, x0 letters X; for n0 at least 3 the product of the factors of its l' is
+    // in s), then the members X^j root. Rows are allocated only for the root and members up to the last kept member.
+    private void Chain(int n0, int code, int x0, PairingTables<T>.Scratch s)
     {
         var n = _plan.Degree;
-        while (true)
+        var last = n - n0;
+        var highest = -1;
+        for (var j = 0; j <= last; j++)
         {
+            if (_plan.KeptSlot(n0 + j, _plan.Rank(n0 + j, code)) >= 0)
+            {
+                highest = j;
+            }
+        }
+
+        var wantRoot = n0 < n || highest >= 0;
+        var rootRows = highest >= 0 ? Enumerable.Range(0, x0 + 1).Select(i => new T[n0 - i]).ToArray() : s.RootRows;
+        if (n0 == 1)
+        {
+            rootRows[0][0] = _tables.One;
+        }
+        else
+        {
+            Coefficients[n0][_plan.Rank(n0, code)] = _tables.DeriveFromProduct(n0, x0, s, wantRoot ? rootRows[0].AsSpan(0, n0) : []);
+            for (var i = 1; wantRoot && i <= x0; i++)
+            {
+                s.Product.AsSpan(((i - 1) * s.Stride) + 1, n0 - i).CopyTo(rootRows[i]);
+            }
+        }
+
+        var firstRows = highest >= 1 ? new T[last + 1][] : s.FirstRowList;
+        for (var j = 0; j <= last; j++)
+        {
+            var m = n0 + j;
+            if (j > 0)
+            {
+                var wantTable = m < n || j <= highest;
+                var row = wantTable ? (j <= highest ? new T[m] : s.FirstRows[j]) : null;
+                firstRows[j] = row!;
+                var source = new PairingTable<T>(firstRows, rootRows, j - 1);
+                Coefficients[m][_plan.Rank(m, code)] = _tables.DeriveFromTable(m, x0 + j, source, s, row is null ? [] : row.AsSpan(0, m));
+            }
+
             var slot = _plan.KeptSlot(m, _plan.Rank(m, code));
             if (slot >= 0)
             {
-                _kept[m][slot] = s.Table.AsSpan(0, PairingTables<T>.TableSize(m, x)).ToArray();
+                _kept[m][slot] = new PairingTable<T>(firstRows, rootRows, j);
             }
-
-            if (m == n)
-            {
-                return;
-            }
-
-            PairingTables<T>.Load(s.Table, m, x, s);
-            m++;
-            x++;
-            Coefficients[m][_plan.Rank(m, code)] = _tables.Derive(m, x, s, m < n);
         }
     }
 
@@ -119,13 +141,13 @@ internal sealed class DualBasisPass<T>
             var table = _kept[factorLength][_plan.KeptSlot(factorLength, _plan.Rank(factorLength, factorCode))];
             for (var e = 0; e < power; e++)
             {
-                if (rows == 0 && columns == 0)
+                if (columns == 0)
                 {
                     PairingTables<T>.Load(table, factorLength, factorX, s);
                 }
                 else
                 {
-                    PairingTables<T>.Multiply(rows, columns, table, factorLength, factorX, s);
+                    _tables.Multiply(rows, columns, table, factorLength, factorX, s);
                 }
 
                 rows += factorX;

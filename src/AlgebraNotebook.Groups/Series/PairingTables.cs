@@ -5,16 +5,18 @@ namespace AlgebraNotebook.Groups.Series;
 /// <summary>
 /// The table operations of <see cref="BchDualBasisSolver"/> in the arithmetic <typeparamref name="T"/>, shared by the
 /// pass over words (<see cref="DualBasisPass{T}"/>) and the bound over classes (<see cref="DualBasisBound"/>). A table
-/// t(i, k) = &lt;S_w, X^i Z^k&gt; / (i! k!) of a word of length m with x letters X is triangular: row i (0..x) holds
-/// k = 1..m - i. A product is held as a rectangle (rows a, columns j = 0..length) in a <see cref="Scratch"/>.
+/// t(i, k) = &lt;S_w, X^i Z^k&gt; / k! of a word of length m with x letters X has rows i = 0..x holding k = 1..m - i
+/// (<see cref="PairingTable{T}"/>). With this normalisation a shuffle product is a polynomial product in k and a
+/// binomial one in i, and the table of X l' is that of l' with one new first row. A product is held as a rectangle
+/// (rows a, columns j = 0..length) in a <see cref="Scratch"/>.
 /// </summary>
 internal sealed class PairingTables<T>
     where T : struct, IPassArithmetic<T>
 {
     private readonly T[] _alpha;
     private readonly T[] _bernoulli;
-    private readonly T[] _inverse;
     private readonly T[] _inverseFactorial;
+    private readonly T[][] _binomial;
     private readonly T[][] _rowZero;
 
     /// <summary>The constants of the plan in this arithmetic.</summary>
@@ -23,7 +25,7 @@ internal sealed class PairingTables<T>
         Degree = plan.Degree;
         _alpha = plan.Alpha.Select(T.FromRational).ToArray();
         _bernoulli = plan.Bernoulli.Select(T.FromRational).ToArray();
-        _inverse = plan.Inverses.Select(T.FromRational).ToArray();
+        _binomial = plan.Binomials.Select(row => row.Select(T.FromRational).ToArray()).ToArray();
         _inverseFactorial = plan.InverseFactorials.Select(T.FromRational).ToArray();
         _rowZero = plan.RowZero.Select(row => row.Select(T.FromRational).ToArray()).ToArray();
         One = T.FromRational(1);
@@ -35,28 +37,28 @@ internal sealed class PairingTables<T>
     /// <summary>The image of 1.</summary>
     public T One { get; }
 
-    /// <summary>Entries of the table of a word of length m with x letters X.</summary>
-    public static int TableSize(int m, int x) => RowOffset(m, x + 1);
-
     /// <summary>Fresh scratch for one thread.</summary>
     public Scratch NewScratch() => new(Degree);
 
     /// <summary>The product := the table (length m, x rows).</summary>
-    public static void Load(ReadOnlySpan<T> table, int m, int x, Scratch s)
+    public static void Load(PairingTable<T> table, int m, int x, Scratch s)
     {
         var stride = s.Stride;
         var product = s.Product;
         for (var i = 0; i <= x; i++)
         {
             product[i * stride] = T.Zero;
-            table.Slice(RowOffset(m, i), m - i).CopyTo(product.AsSpan((i * stride) + 1));
+            table.Row(i, m).CopyTo(product.AsSpan((i * stride) + 1));
             product.AsSpan((i * stride) + m - i + 1, i).Clear();
         }
     }
 
-    /// <summary>The product (rows 0..rows, columns 0..columns) := itself times the table (length m, x rows).</summary>
+    /// <summary>
+    /// The product (rows 0..rows, columns 0..columns) := its shuffle with the table (length m, x rows): entry (a + i,
+    /// j + k) gains C(a + i, i) product(a, j) table(i, k).
+    /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static void Multiply(int rows, int columns, ReadOnlySpan<T> table, int m, int x, Scratch s)
+    public void Multiply(int rows, int columns, PairingTable<T> table, int m, int x, Scratch s)
     {
         var stride = s.Stride;
         var source = s.Product;
@@ -68,6 +70,7 @@ internal sealed class PairingTables<T>
 
         for (var a = 0; a <= rows; a++)
         {
+            var binomials = _binomial[a];
             for (var j = 1; j <= columns - a; j++)
             {
                 var left = source[(a * stride) + j];
@@ -78,11 +81,12 @@ internal sealed class PairingTables<T>
 
                 for (var i = 0; i <= x; i++)
                 {
-                    var right = table.Slice(RowOffset(m, i), m - i);
-                    var into = target.AsSpan(((a + i) * stride) + j + 1, m - i);
+                    var weight = i == 0 ? left : T.Multiply(left, binomials[i]);
+                    var right = table.Row(i, m);
+                    var into = target.AsSpan(((a + i) * stride) + j + 1, right.Length);
                     for (var k = 0; k < right.Length; k++)
                     {
-                        into[k] = T.MultiplyAdd(into[k], left, right[k]);
+                        into[k] = T.MultiplyAdd(into[k], weight, right[k]);
                     }
                 }
             }
@@ -106,16 +110,16 @@ internal sealed class PairingTables<T>
     }
 
     /// <summary>
-    /// From t_l' in the product (l' of length m - 1 with x - 1 letters X) for l = X l': returns c_l = t_l(0, 1), and
-    /// writes t_l into <see cref="Scratch.Table"/> when <paramref name="wantTable"/>.
+    /// For l = X l' (length m, x letters X) with t_l' in the product: returns c_l = t_l(0, 1) and, when
+    /// <paramref name="firstRow"/> is not empty, writes t_l(0, k) for k = 1..m into it. Rows i &gt;= 1 of t_l are rows
+    /// i - 1 of t_l'.
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public T Derive(int m, int x, Scratch s, bool wantTable)
+    public T DeriveFromProduct(int m, int x, Scratch s, Span<T> firstRow)
     {
         var stride = s.Stride;
         var product = s.Product;
         var u = s.Pairing;
-        var c = T.Zero;
         for (var j = 1; j < m; j++)
         {
             var sum = T.Zero;
@@ -125,45 +129,66 @@ internal sealed class PairingTables<T>
             }
 
             u[j] = sum;
-            c = T.MultiplyAdd(c, _bernoulli[j], sum);
         }
 
-        if (!wantTable)
+        return Finish(m, u, firstRow);
+    }
+
+    /// <summary>As <see cref="DeriveFromProduct"/>, with t_l' given as a table.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public T DeriveFromTable(int m, int x, PairingTable<T> source, Scratch s, Span<T> firstRow)
+    {
+        var u = s.Pairing;
+        u.AsSpan(0, m).Clear();
+        for (var a = 0; a < x; a++)
+        {
+            var row = source.Row(a, m - 1);
+            var weight = _alpha[a];
+            for (var j = 1; j <= row.Length; j++)
+            {
+                u[j] = T.MultiplyAdd(u[j], weight, row[j - 1]);
+            }
+        }
+
+        return Finish(m, u, firstRow);
+    }
+
+    // c_l = sum of B+_j u(j); t_l(0, k) = sum over j of RowZero[k][j] u(j). B+_j vanishes for odd j above 1, so the
+    // weights RowZero[k][j] (with B+_(j-k+1)) vanish unless j = k - 1, k, k + 1, k + 3, ...
+    private T Finish(int m, T[] u, Span<T> firstRow)
+    {
+        var c = T.Multiply(_bernoulli[1], u[1]);
+        for (var j = 2; j < m; j += 2)
+        {
+            c = T.MultiplyAdd(c, _bernoulli[j], u[j]);
+        }
+
+        if (firstRow.IsEmpty)
         {
             return c;
         }
 
-        var table = s.Table;
         for (var k = 1; k <= m; k++)
         {
             var weights = _rowZero[k];
-            var sum = T.Zero;
-            for (var j = Math.Max(1, k - 1); j < m; j++)
+            var sum = k >= 2 ? T.Multiply(weights[k - 1], u[k - 1]) : T.Zero;
+            if (k < m)
+            {
+                sum = T.MultiplyAdd(sum, weights[k], u[k]);
+            }
+
+            for (var j = k + 1; j < m; j += 2)
             {
                 sum = T.MultiplyAdd(sum, weights[j], u[j]);
             }
 
-            table[k - 1] = sum;
-        }
-
-        for (var i = 1; i <= x; i++)
-        {
-            var scale = _inverse[i];
-            var offset = RowOffset(m, i);
-            var from = (i - 1) * stride;
-            for (var k = 1; k <= m - i; k++)
-            {
-                table[offset + k - 1] = T.Multiply(product[from + k], scale);
-            }
+            firstRow[k - 1] = sum;
         }
 
         return c;
     }
 
-    // Start of row i in the triangular table of a word of length m: rows of m, m - 1, ... entries.
-    private static int RowOffset(int m, int i) => (i * m) - (i * (i - 1) / 2);
-
-    /// <summary>Per-thread work space: two product rectangles, one table and the pairings u(j).</summary>
+    /// <summary>Per-thread work space: two product rectangles, the pairings u(j), and row buffers for chains.</summary>
     public sealed class Scratch(int n)
     {
         /// <summary>Row stride of the rectangles.</summary>
@@ -175,10 +200,18 @@ internal sealed class PairingTables<T>
         /// <summary>The other rectangle.</summary>
         public T[] Spare { get; set; } = new T[(n + 1) * (n + 1)];
 
-        /// <summary>The derived table.</summary>
-        public T[] Table { get; } = new T[(n + 1) * (n + 1)];
-
         /// <summary>u(j) of the last derivation.</summary>
         public T[] Pairing { get; } = new T[n + 1];
+
+        /// <summary>Rows of a chain's first word when none of the chain is kept.</summary>
+        public T[][] RootRows { get; } = Rows(n);
+
+        /// <summary>New first rows of a chain's members when they are not kept.</summary>
+        public T[][] FirstRows { get; } = Rows(n);
+
+        /// <summary>The list of a chain's first rows when none of its members is kept.</summary>
+        public T[][] FirstRowList { get; } = new T[n + 1][];
+
+        private static T[][] Rows(int n) => Enumerable.Range(0, n + 1).Select(_ => new T[n + 1]).ToArray();
     }
 }
