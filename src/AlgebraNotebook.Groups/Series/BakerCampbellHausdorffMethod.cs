@@ -32,7 +32,7 @@ public enum BakerCampbellHausdorffMethod
     /// <summary>
     /// The default. Each Lyndon coordinate is a pairing with the dual basis of the Poincare-Birkhoff-Witt basis
     /// (Reutenauer, Free Lie Algebras, Thm 5.3), computed by recurrences on Lyndon factorisations with no triangular
-    /// system (derivation in the source), modulo three primes near 2^31 (six when needed), plus a pass that bounds
+    /// system (derivation in the source), modulo four primes near 2^26 (eight when needed), plus a pass that bounds
     /// every coordinate so that the Chinese remainder theorem gives the exact rationals. Measured on the idle machine
     /// of the benchmark results. Capped by <see cref="SeriesLimits.MaxWordCoefficientDegree"/>.
     /// </summary>

@@ -34,7 +34,7 @@ namespace AlgebraNotebook.Groups.Series;
 /// <para>
 /// Exactness. c_l has a denominator dividing D_n = n! lcm(1..n) (n = |l|): the word coefficients of Z of degree n
 /// have such denominators, and the Lyndon coordinates follow from them by a unit triangular integer system (see
-/// <see cref="BchLyndonRowSolver"/>). The pass runs modulo two primes near 2^62 (four when needed), and a second
+/// <see cref="BchLyndonRowSolver"/>). The pass runs modulo four primes near 2^26 (eight when needed), and a second
 /// pass on absolute values (<see cref="MagnitudeBound"/>) bounds |c_l|; the Chinese remainder theorem then gives the
 /// integer D_n c_l, proved unique because twice the bound on |D_n c_l| is below the product of the primes.
 /// </para>
@@ -50,7 +50,7 @@ internal static class BchDualBasisSolver
     /// <summary>
     /// The non-zero Lyndon coordinates of log(e^A e^B) in degrees 1..N, by degree then word; words are written with the
     /// letters <paramref name="smallLetter"/> (bit 0) and <paramref name="largeLetter"/> (bit 1). <paramref name="firstIsSmall"/>:
-    /// A is the smaller letter. Null when even four primes are too few (the caller then uses another variant).
+    /// A is the smaller letter. Null when even eight primes are too few (the caller then uses another variant).
     /// <paramref name="allPrimes"/> runs the second pair of primes even when the first suffices (tests).
     /// </summary>
     public static (LyndonWord Word, Rational Coefficient)[]? TrySolve(int degree, int smallLetter, int largeLetter, bool firstIsSmall, int? threads = null, bool allPrimes = false)
@@ -59,9 +59,9 @@ internal static class BchDualBasisSolver
         var sw = System.Diagnostics.Stopwatch.StartNew();
         var plan = new BchDualBasisPlan(degree);
 
-        Console.WriteLine($"T plan {sw.ElapsedMilliseconds}");
+        Console.WriteLine($"T plan {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
         var largest = DualBasisBound.Largest(plan);
-        Console.WriteLine($"T bound {sw.ElapsedMilliseconds}");
+        Console.WriteLine($"T bound {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
         var scales = new BigInteger[degree + 1];
         var bitsNeeded = 0.0;
         for (var n = 1; n <= degree; n++)
@@ -78,16 +78,16 @@ internal static class BchDualBasisSolver
             bitsNeeded = Math.Max(bitsNeeded, Math.Log2(widened) + BigInteger.Log(scales[n], 2) + 1 + 1e-9);
         }
 
-        var first = new DualBasisPass<ResiduePair<FirstPrimePair>>(plan);
+        var first = new DualBasisPass<ResidueQuad<FirstPrimeQuad>>(plan);
         first.Run(parallelism);
-        Console.WriteLine($"T pass {sw.ElapsedMilliseconds}");
-        var primes = ResiduePair<FirstPrimePair>.Primes.ToList();
-        DualBasisPass<ResiduePair<SecondPrimePair>>? second = null;
+        Console.WriteLine($"T pass {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
+        var primes = ResidueQuad<FirstPrimeQuad>.Primes.ToList();
+        DualBasisPass<ResidueQuad<SecondPrimeQuad>>? second = null;
         if (allPrimes || bitsNeeded >= ProductBits(primes) - 1)
         {
-            second = new DualBasisPass<ResiduePair<SecondPrimePair>>(plan);
+            second = new DualBasisPass<ResidueQuad<SecondPrimeQuad>>(plan);
             second.Run(parallelism);
-            primes.AddRange(ResiduePair<SecondPrimePair>.Primes);
+            primes.AddRange(ResidueQuad<SecondPrimeQuad>.Primes);
             if (bitsNeeded >= ProductBits(primes) - 1)
             {
                 return null;
@@ -95,63 +95,116 @@ internal static class BchDualBasisSolver
         }
 
         var crt = new Garner(primes);
-        var zeros = new bool[degree + 1][];
-        var offsets = new int[degree + 2];
-        for (var n = 1; n <= degree; n++)
-        {
-            var a = first.Coefficients[n];
-            var b = second?.Coefficients[n];
-            zeros[n] = new bool[a.Length];
-            var count = 0;
-            for (var r = 0; r < a.Length; r++)
-            {
-                zeros[n][r] = a[r].IsZero && (b is null || b[r].IsZero);
-                count += zeros[n][r] ? 0 : 1;
-            }
+        var result = Assemble(plan, first.Coefficients, second?.Coefficients, primes, scales, crt, parallelism, (n, code) => ToLyndonWord(code, n, smallLetter, largeLetter), !firstIsSmall);
+        Console.WriteLine($"T out {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
+        return result;
+    }
 
-            offsets[n + 1] = offsets[n] + count;
+    // The non-zero coefficients in order (degree, then word), in chunks of words shared among the threads.
+    private static (LyndonWord Word, Rational Coefficient)[] Assemble(
+        BchDualBasisPlan plan,
+        ResidueQuad<FirstPrimeQuad>[][] first,
+        ResidueQuad<SecondPrimeQuad>[][]? second,
+        List<ulong> primes,
+        BigInteger[] scales,
+        Garner crt,
+        int parallelism,
+        Func<int, int, LyndonWord> word,
+        bool largeFirst)
+    {
+        const int ChunkSize = 2048;
+        var chunks = new List<(int Degree, int Start, int End, int Offset)>();
+        var total = 0;
+        for (var n = 1; n < first.Length; n++)
+        {
+            for (var start = 0; start < first[n].Length; start += ChunkSize)
+            {
+                var end = Math.Min(first[n].Length, start + ChunkSize);
+                chunks.Add((n, start, end, total));
+                for (var r = start; r < end; r++)
+                {
+                    total += IsZero(n, r) ? 0 : 1;
+                }
+            }
         }
 
-        Console.WriteLine($"T count {sw.ElapsedMilliseconds}");
-        var result = new (LyndonWord Word, Rational Coefficient)[offsets[degree + 1]];
+        var scaleResidues = scales.Select(d => d.IsZero ? [] : primes.Select(q => (ulong)(d % q)).ToArray()).ToArray();
+        var result = new (LyndonWord Word, Rational Coefficient)[total];
         var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, parallelism) };
-        Parallel.For(1, degree + 1, options, n =>
+        Parallel.For(0, chunks.Count, options, c =>
         {
+            var (n, start, end, at) = chunks[c];
             var words = plan.Words(n);
-            var scaleResidues = primes.Select(q => (ulong)(scales[n] % q)).ToArray();
-            var negate = !firstIsSmall && n % 2 == 0;
-            var residues = new ulong[primes.Count];
-            var at = offsets[n];
-            for (var r = 0; r < words.Length; r++)
+            var negate = largeFirst && n % 2 == 0;
+            Span<ulong> residues = stackalloc ulong[primes.Count];
+            for (var r = start; r < end; r++)
             {
-                if (zeros[n][r])
+                if (IsZero(n, r))
                 {
                     continue;
                 }
 
-                var a = first.Coefficients[n][r];
-                residues[0] = a[0];
-                residues[1] = a[1];
-                if (second is not null)
+                for (var lane = 0; lane < 4; lane++)
                 {
-                    var b = second.Coefficients[n][r];
-                    residues[2] = b[0];
-                    residues[3] = b[1];
+                    residues[lane] = first[n][r][lane];
+                    if (second is not null)
+                    {
+                        residues[4 + lane] = second[n][r][lane];
+                    }
                 }
 
                 // The residues of c_l times those of D_n are the residues of the integer D_n c_l.
                 for (var lane = 0; lane < residues.Length; lane++)
                 {
-                    residues[lane] = (ulong)((UInt128)residues[lane] * scaleResidues[lane] % primes[lane]);
+                    residues[lane] = (ulong)((UInt128)residues[lane] * scaleResidues[n][lane] % primes[lane]);
                 }
 
                 var value = crt.Symmetric(residues);
-                result[at++] = (ToLyndonWord(words[r], n, smallLetter, largeLetter), new Rational(negate ? -value : value, scales[n]));
+                result[at++] = (word(n, words[r]), Reduced(negate ? -value : value, scales[n]));
             }
         });
 
-        Console.WriteLine($"T out {sw.ElapsedMilliseconds}");
         return result;
+
+        bool IsZero(int n, int r) => first[n][r].IsZero && (second is null || second[n][r].IsZero);
+    }
+
+    // numerator / denominator in lowest terms, the common factor found in 128-bit arithmetic when both fit.
+    private static Rational Reduced(BigInteger numerator, BigInteger denominator)
+    {
+        if (numerator.IsZero || BigInteger.Abs(numerator).GetBitLength() >= 127 || denominator.GetBitLength() >= 127)
+        {
+            return new Rational(numerator, denominator);
+        }
+
+        var a = (UInt128)BigInteger.Abs(numerator);
+        var b = (UInt128)denominator;
+        var g = BinaryGcd(a, b);
+        var reduced = (BigInteger)(a / g);
+        return Rational.FromCanonical(numerator.Sign < 0 ? -reduced : reduced, (BigInteger)(b / g));
+    }
+
+    private static UInt128 BinaryGcd(UInt128 a, UInt128 b)
+    {
+        if (a == 0)
+        {
+            return b;
+        }
+
+        var shift = (int)UInt128.TrailingZeroCount(a | b);
+        a >>= (int)UInt128.TrailingZeroCount(a);
+        while (b != 0)
+        {
+            b >>= (int)UInt128.TrailingZeroCount(b);
+            if (a > b)
+            {
+                (a, b) = (b, a);
+            }
+
+            b -= a;
+        }
+
+        return a << shift;
     }
 
     private static double ProductBits(List<ulong> primes) => primes.Sum(p => Math.Log2(p));
@@ -195,16 +248,29 @@ internal static class BchDualBasisSolver
             _modulus = radix;
         }
 
-        public BigInteger Symmetric(ulong[] residues)
+        public BigInteger Symmetric(ReadOnlySpan<ulong> residues)
         {
-            if (_primes.Length == 2)
+            if (_primes.Length == 4)
             {
-                // x = r0 + p0 d with d = (r1 - r0) / p0 mod p1, below p0 p1 < 2^124.
-                var (p0, p1) = (_primes[0], _primes[1]);
-                var d = (ulong)((UInt128)((residues[1] + p1 - (residues[0] % p1)) % p1) * _inverses[1][0] % p1);
-                var x = residues[0] + ((UInt128)p0 * d);
-                var modulus = (UInt128)p0 * p1;
-                return x > modulus / 2 ? -(BigInteger)(modulus - x) : (BigInteger)x;
+                // Mixed-radix digits below 2^26, so products fit in 64 bits; the value is below 2^104.
+                Span<ulong> d = stackalloc ulong[4];
+                UInt128 x = 0;
+                UInt128 radix = 1;
+                for (var i = 0; i < 4; i++)
+                {
+                    var p = _primes[i];
+                    var v = residues[i] % p;
+                    for (var j = 0; j < i; j++)
+                    {
+                        v = (v + p - (d[j] % p)) % p * _inverses[i][j] % p;
+                    }
+
+                    d[i] = v;
+                    x += radix * v;
+                    radix *= p;
+                }
+
+                return x > radix / 2 ? -(BigInteger)(radix - x) : (BigInteger)x;
             }
 
             Span<ulong> digits = stackalloc ulong[_primes.Length];

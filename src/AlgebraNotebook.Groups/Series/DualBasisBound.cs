@@ -1,5 +1,5 @@
 using System.Numerics;
-using System.Text;
+using System.Runtime.CompilerServices;
 
 namespace AlgebraNotebook.Groups.Series;
 
@@ -15,6 +15,7 @@ namespace AlgebraNotebook.Groups.Series;
 internal static class DualBasisBound
 {
     /// <summary>Bound on max |c_l| over Lyndon words l of each length 1..N (index 0 unused).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static double[] Largest(BchDualBasisPlan plan)
     {
         var n = plan.Degree;
@@ -32,21 +33,22 @@ internal static class DualBasisBound
         bound[1][0] = [[tables.One]];
 
         var patterns = RootPatterns(plan);
+        var firstRow = new MagnitudeBound[n + 1];
         for (var m = 2; m <= n; m++)
         {
             var wantTable = m < n;
+            var first = wantTable ? firstRow.AsSpan(0, m) : [];
             for (var x = 1; x < m; x++)
             {
-                MagnitudeBound[][]? table = null;
+                var table = wantTable ? Empty(m, x) : null;
                 var previous = bound[m - 1][x - 1];
                 if (previous is not null)
                 {
-                    var firstRow = new MagnitudeBound[m];
-                    var c = tables.DeriveFromTable(m, x, new PairingTable<MagnitudeBound>(null, previous, 0), s, wantTable ? firstRow : []);
+                    var c = tables.DeriveFromTable(m, x, new PairingTable<MagnitudeBound>(null, previous, 0), s, first);
                     largest[m] = Math.Max(largest[m], c.Value);
-                    if (wantTable)
+                    for (var i = 0; table is not null && i <= x; i++)
                     {
-                        Absorb(ref table, [firstRow, .. previous.Take(x).Select(row => row.ToArray())]);
+                        Absorb(table[i], i == 0 ? firstRow : previous[i - 1]);
                     }
                 }
 
@@ -78,19 +80,11 @@ internal static class DualBasisBound
                         }
                     }
 
-                    var firstRow = new MagnitudeBound[m];
-                    var c = tables.DeriveFromProduct(m, x, s, wantTable ? firstRow : []);
+                    var c = tables.DeriveFromProduct(m, x, s, first);
                     largest[m] = Math.Max(largest[m], c.Value);
-                    if (wantTable)
+                    for (var i = 0; table is not null && i <= x; i++)
                     {
-                        var candidate = new MagnitudeBound[x + 1][];
-                        candidate[0] = firstRow;
-                        for (var i = 1; i <= x; i++)
-                        {
-                            candidate[i] = s.Product.AsSpan(((i - 1) * s.Stride) + 1, m - i).ToArray();
-                        }
-
-                        Absorb(ref table, candidate);
+                        Absorb(table[i], i == 0 ? firstRow : s.Product.AsSpan(((i - 1) * s.Stride) + 1, m - i));
                     }
                 }
 
@@ -101,44 +95,50 @@ internal static class DualBasisBound
         return largest;
     }
 
-    // Folds one candidate table into the class maxima, entry by entry.
-    private static void Absorb(ref MagnitudeBound[][]? table, MagnitudeBound[][] candidate)
+    // Zero rows for a class (length m, x letters X); zero is below every bound.
+    private static MagnitudeBound[][] Empty(int m, int x)
     {
-        if (table is null)
+        var rows = new MagnitudeBound[x + 1][];
+        for (var i = 0; i <= x; i++)
         {
-            table = candidate;
-            return;
+            rows[i] = new MagnitudeBound[m - i];
         }
 
-        for (var i = 0; i < table.Length; i++)
+        return rows;
+    }
+
+    // The row := its entry-by-entry maximum with the candidate.
+    private static void Absorb(MagnitudeBound[] row, ReadOnlySpan<MagnitudeBound> candidate)
+    {
+        for (var k = 0; k < row.Length; k++)
         {
-            for (var k = 0; k < table[i].Length; k++)
+            if (candidate[k].Value > row[k].Value)
             {
-                if (candidate[i][k].Value > table[i][k].Value)
-                {
-                    table[i][k] = candidate[i][k];
-                }
+                row[k] = candidate[k];
             }
         }
     }
 
-    // The distinct factor patterns (factor length, letters X, repetition of the same word) of the roots, by class.
+    // The distinct factor patterns (factor length, letters X, repetition of the same word) of the roots, by class; the
+    // key of a pattern is its numbers as characters, looked up without allocating.
     private static List<(int Length, int X, int Power)[]>?[][] RootPatterns(BchDualBasisPlan plan)
     {
         var n = plan.Degree;
         var patterns = new List<(int, int, int)[]>?[n + 1][];
         Span<int> starts = stackalloc int[n + 1];
-        var key = new StringBuilder();
+        Span<char> key = stackalloc char[(3 * n) + 1];
         for (var m = 1; m <= n; m++)
         {
             patterns[m] = new List<(int, int, int)[]>?[m + 1];
-            var seen = new HashSet<string>();
+            var seen = new HashSet<string>().GetAlternateLookup<ReadOnlySpan<char>>();
             foreach (var code in m >= 3 ? plan.Roots(m) : [])
             {
                 var length = m - 1;
                 var rest = code & ((1 << length) - 1);
                 var count = BchDualBasisPlan.LyndonFactorisation(rest, length, starts);
-                var groups = new List<(int, int, int)>();
+                var x = m - BitOperations.PopCount((uint)code);
+                key[0] = (char)x;
+                var size = 1;
                 for (var f = 0; f < count;)
                 {
                     var factor = BchDualBasisPlan.Factor(rest, length, starts, f);
@@ -150,20 +150,21 @@ internal static class DualBasisBound
                         power++;
                     }
 
-                    groups.Add((factorLength, factorLength - BitOperations.PopCount((uint)factor), power));
+                    key[size++] = (char)factorLength;
+                    key[size++] = (char)(factorLength - BitOperations.PopCount((uint)factor));
+                    key[size++] = (char)power;
                     f += power;
                 }
 
-                var x = m - BitOperations.PopCount((uint)code);
-                key.Clear().Append(x).Append(':');
-                foreach (var (a, b, c) in groups)
+                if (seen.Add(key[..size]))
                 {
-                    key.Append(a).Append(',').Append(b).Append(',').Append(c).Append(';');
-                }
+                    var groups = new (int, int, int)[(size - 1) / 3];
+                    for (var g = 0; g < groups.Length; g++)
+                    {
+                        groups[g] = (key[1 + (3 * g)], key[2 + (3 * g)], key[3 + (3 * g)]);
+                    }
 
-                if (seen.Add(key.ToString()))
-                {
-                    (patterns[m][x] ??= []).Add(groups.ToArray());
+                    (patterns[m][x] ??= []).Add(groups);
                 }
             }
         }

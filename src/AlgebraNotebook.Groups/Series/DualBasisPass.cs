@@ -1,5 +1,6 @@
 using System.Collections.Concurrent;
 using System.Numerics;
+using System.Runtime.CompilerServices;
 
 namespace AlgebraNotebook.Groups.Series;
 
@@ -65,10 +66,17 @@ internal sealed class DualBasisPass<T>
                 return s;
             }, pool.Add);
         }
+
+        // The kept tables are no longer needed; only the coefficients are.
+        for (var m = 1; m <= _plan.Degree; m++)
+        {
+            Array.Clear(_kept[m]);
+        }
     }
 
     // A chain from its root (length n0, code, x0 letters X; for n0 at least 3 the product of the factors of its l' is
     // in s), then the members X^j root. Rows are allocated only for the root and members up to the last kept member.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void Chain(int n0, int code, int x0, PairingTables<T>.Scratch s)
     {
         var n = _plan.Degree;
@@ -83,7 +91,16 @@ internal sealed class DualBasisPass<T>
         }
 
         var wantRoot = n0 < n || highest >= 0;
-        var rootRows = highest >= 0 ? Enumerable.Range(0, x0 + 1).Select(i => new T[n0 - i]).ToArray() : s.RootRows;
+        var rootRows = s.RootRows;
+        if (highest >= 0)
+        {
+            rootRows = new T[x0 + 1][];
+            for (var i = 0; i <= x0; i++)
+            {
+                rootRows[i] = new T[n0 - i];
+            }
+        }
+
         if (n0 == 1)
         {
             rootRows[0][0] = _tables.One;

@@ -4,7 +4,7 @@ namespace AlgebraNotebook.Groups.Series;
 
 /// <summary>
 /// The arithmetic one pass of <see cref="DualBasisPass{T}"/> runs in: residues of rationals modulo a few primes
-/// (<see cref="ResiduePair{TPrimes}"/>), or upper bounds on absolute values (<see cref="MagnitudeBound"/>). The pass
+/// (<see cref="ResidueQuad{TPrimes}"/>), or upper bounds on absolute values (<see cref="MagnitudeBound"/>). The pass
 /// only adds and multiplies, so the same code computes either.
 /// </summary>
 internal interface IPassArithmetic<T>

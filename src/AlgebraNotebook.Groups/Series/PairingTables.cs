@@ -155,6 +155,7 @@ internal sealed class PairingTables<T>
 
     // c_l = sum of B+_j u(j); t_l(0, k) = sum over j of RowZero[k][j] u(j). B+_j vanishes for odd j above 1, so the
     // weights RowZero[k][j] (with B+_(j-k+1)) vanish unless j = k - 1, k, k + 1, k + 3, ...
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private T Finish(int m, T[] u, Span<T> firstRow)
     {
         var c = T.Multiply(_bernoulli[1], u[1]);

@@ -4,8 +4,9 @@ using BenchmarkDotNet.Attributes;
 namespace AlgebraNotebook.Benchmarks.Groups;
 
 /// <summary>
-/// log(e^X e^Y) in the Lyndon basis to degree N: the row variant (the default) beside the column-wise word-coefficient
-/// variant and the associative reference method, at degrees where the reference finishes in a few seconds.
+/// log(e^X e^Y) in the Lyndon basis to degree N: the dual-basis variant (the default) beside the row and column
+/// word-coefficient variants and the associative reference method, at degrees where the reference finishes in a few
+/// seconds.
 /// </summary>
 [Config(typeof(FewIterationsConfig))]
 public class BchSeriesBenchmarks
@@ -19,8 +20,12 @@ public class BchSeriesBenchmarks
     [ParamsSource(nameof(Degrees))]
     public int Degree { get; set; }
 
-    /// <summary>The default method (rows); returns the number of non-zero coefficients.</summary>
+    /// <summary>The default method (dual basis); returns the number of non-zero coefficients.</summary>
     [Benchmark(Baseline = true)]
+    public int DualBasis() => BakerCampbellHausdorff.Series(Degree, BakerCampbellHausdorffMethod.DualBasis, Unlimited).Terms.Count;
+
+    /// <summary>The row-wise triangular solve on Lyndon words.</summary>
+    [Benchmark]
     public int WordCoefficientRows() => BakerCampbellHausdorff.Series(Degree, BakerCampbellHausdorffMethod.WordCoefficientRows, Unlimited).Terms.Count;
 
     /// <summary>The column-wise word-coefficient variant (expanded bracket views).</summary>
@@ -33,8 +38,9 @@ public class BchSeriesBenchmarks
 }
 
 /// <summary>
-/// Scaling of the row variant (the default) with the degree (the reference is left out: above degree 16 it takes tens
-/// of seconds and gigabytes). Degrees 22 and 24 are measured as whole runs (see <see cref="BchWholeRun"/>).
+/// Scaling of the dual-basis variant (the default) with the degree, beside the row variant (the reference is left out:
+/// above degree 16 it takes tens of seconds and gigabytes). Degrees 22 and 24 are measured as whole runs (see
+/// <see cref="BchWholeRun"/>).
 /// </summary>
 [Config(typeof(FewIterationsConfig))]
 public class BchScalingBenchmarks
@@ -48,7 +54,11 @@ public class BchScalingBenchmarks
     [ParamsSource(nameof(Degrees))]
     public int Degree { get; set; }
 
-    /// <summary>The whole series; returns the number of non-zero coefficients.</summary>
+    /// <summary>The whole series by the default method; returns the number of non-zero coefficients.</summary>
+    [Benchmark(Baseline = true)]
+    public int DualBasis() => BakerCampbellHausdorff.Series(Degree, BakerCampbellHausdorffMethod.DualBasis, Unlimited).Terms.Count;
+
+    /// <summary>The whole series by the row variant.</summary>
     [Benchmark]
     public int WordCoefficientRows() => BakerCampbellHausdorff.Series(Degree, BakerCampbellHausdorffMethod.WordCoefficientRows, Unlimited).Terms.Count;
 }

@@ -2,6 +2,7 @@ using System.Numerics;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Groups.FreeLie;
 using AlgebraNotebook.Groups.Series;
+using AlgebraNotebook.Groups.Tests.FreeLie;
 
 namespace AlgebraNotebook.Groups.Tests.Series;
 
@@ -136,61 +137,81 @@ public class BakerCampbellHausdorffDualBasisTests
     }
 
     [Fact]
-    public void The_Montgomery_primes_are_prime_and_their_constants_invert_them()
+    public void The_primes_are_distinct_primes_below_two_to_the_26()
     {
-        // Miller-Rabin with the first twelve prime bases is deterministic below 3.3e24 (common practice); -p^-1 mod 2^64
-        // is checked by multiplication.
-        ulong[] primes = [.. ResiduePair<FirstPrimePair>.Primes, .. ResiduePair<SecondPrimePair>.Primes];
-        ulong[] inverses = [FirstPrimePair.NegativeInverse0, FirstPrimePair.NegativeInverse1, SecondPrimePair.NegativeInverse0, SecondPrimePair.NegativeInverse1];
-        Assert.Equal(4, primes.Distinct().Count());
-        for (var i = 0; i < primes.Length; i++)
+        // Trial division (definition of a prime); below 2^26 the products of two residues plus a residue stay below 2^53,
+        // where doubles are exact (IEEE 754 binary64, common practice).
+        ulong[] primes = [.. ResidueQuad<FirstPrimeQuad>.Primes, .. ResidueQuad<SecondPrimeQuad>.Primes];
+        Assert.Equal(8, primes.Distinct().Count());
+        foreach (var p in primes)
         {
-            Assert.True(primes[i] < 1UL << 62, $"{primes[i]} is not below 2^62");
-            Assert.True(IsPrime(primes[i]), $"{primes[i]} is not prime");
-            Assert.Equal(ulong.MaxValue, unchecked(primes[i] * inverses[i]));
+            Assert.True(p < 1UL << 26, $"{p} is not below 2^26");
+            Assert.True(IsPrime(p), $"{p} is not prime");
         }
     }
 
     [Fact]
-    public void Residues_of_constants_round_trip_through_Montgomery_form()
+    public void Residue_arithmetic_matches_integer_arithmetic()
+    {
+        // Oracle: 64-bit integer arithmetic modulo each prime, on random residues (fixed seed) and on the extremes.
+        var random = new Random(FreeLieTestSupport.Seed);
+        var primes = ResidueQuad<FirstPrimeQuad>.Primes;
+        for (var trial = 0; trial < FreeLieTestSupport.Iterations(20_000); trial++)
+        {
+            var values = new long[3][];
+            for (var v = 0; v < 3; v++)
+            {
+                values[v] = primes.Select(p => trial < 4 ? (long)p - 1 - trial : random.NextInt64((long)p)).ToArray();
+            }
+
+            var a = Quad(values[0]);
+            var b = Quad(values[1]);
+            var sum = Quad(values[2]);
+            var product = ResidueQuad<FirstPrimeQuad>.MultiplyAdd(sum, a, b);
+            var added = ResidueQuad<FirstPrimeQuad>.Add(a, b);
+            for (var lane = 0; lane < 4; lane++)
+            {
+                var p = (long)primes[lane];
+                Assert.True((long)product[lane] == ((values[0][lane] * values[1][lane]) + values[2][lane]) % p, $"trial {trial}, lane {lane}: {values[0][lane]} * {values[1][lane]} + {values[2][lane]}");
+                Assert.True((long)added[lane] == (values[0][lane] + values[1][lane]) % p, $"trial {trial}, lane {lane}: {values[0][lane]} + {values[1][lane]}");
+            }
+        }
+    }
+
+    [Fact]
+    public void Residues_of_constants_round_trip()
     {
         // r = a / b mod p must satisfy r b = a mod p for each prime (definition of the residue).
-        var value = new Rational(-691, 2730);
-        var residues = ResiduePair<FirstPrimePair>.FromRational(value);
-        var primes = ResiduePair<FirstPrimePair>.Primes;
-        for (var lane = 0; lane < 2; lane++)
+        var residues = ResidueQuad<FirstPrimeQuad>.FromRational(new Rational(-691, 2730));
+        var primes = ResidueQuad<FirstPrimeQuad>.Primes;
+        for (var lane = 0; lane < 4; lane++)
         {
-            var p = new BigInteger(primes[lane]);
-            Assert.Equal(((-691 % p) + p) % p, new BigInteger(residues[lane]) * 2730 % p);
+            var p = (long)primes[lane];
+            Assert.Equal(((-691 % p) + p) % p, (long)residues[lane] * 2730 % p);
         }
+    }
+
+    // A quad with the given residues, built through FromRational of integers below each prime.
+    private static ResidueQuad<FirstPrimeQuad> Quad(long[] residues)
+    {
+        var primes = ResidueQuad<FirstPrimeQuad>.Primes;
+        var value = ResidueQuad<FirstPrimeQuad>.Zero;
+        for (var lane = 0; lane < 4; lane++)
+        {
+            // The integer that is residues[lane] modulo this prime and 0 modulo the others (Chinese remainder theorem).
+            var others = primes.Where((_, i) => i != lane).Aggregate(BigInteger.One, (m, q) => m * q);
+            var inverse = BigInteger.ModPow(others % primes[lane], primes[lane] - 2, primes[lane]);
+            value = ResidueQuad<FirstPrimeQuad>.Add(value, ResidueQuad<FirstPrimeQuad>.FromRational(new Rational(others * inverse * residues[lane])));
+        }
+
+        return value;
     }
 
     private static bool IsPrime(ulong n)
     {
-        var d = n - 1;
-        var s = 0;
-        while (d % 2 == 0)
+        for (ulong d = 2; d * d <= n; d++)
         {
-            d /= 2;
-            s++;
-        }
-
-        foreach (ulong a in new ulong[] { 2, 3, 5, 7, 11, 13, 17, 19, 23, 29, 31, 37 })
-        {
-            var x = BigInteger.ModPow(a, d, n);
-            if (x.IsOne || x == n - 1)
-            {
-                continue;
-            }
-
-            var witness = true;
-            for (var r = 1; r < s && witness; r++)
-            {
-                x = x * x % n;
-                witness = x != n - 1;
-            }
-
-            if (witness)
+            if (n % d == 0)
             {
                 return false;
             }
