@@ -18,11 +18,7 @@ internal sealed class BchDualBasisPlan
     public BchDualBasisPlan(int degree)
     {
         Degree = degree;
-        _tables = new BinaryLyndonTable[degree + 1];
-        for (var m = 1; m <= degree; m++)
-        {
-            _tables[m] = new BinaryLyndonTable(m, withFactors: false);
-        }
+        _tables = BinaryLyndonTable.UpTo(degree);
 
         _roots = new int[degree + 1][];
         _keptSlots = new int[degree + 1][];

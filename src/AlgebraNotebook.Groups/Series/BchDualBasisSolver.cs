@@ -40,7 +40,7 @@ namespace AlgebraNotebook.Groups.Series;
 /// </para>
 /// <para>
 /// Cost: per Lyndon word, one product of the factor tables of l' (a table of length m has about m x / 2 entries for
-/// x letters X) and O(n^2) for the Bernoulli row; at N = 20 about 3.3e7 products per arithmetic (measured). Memory: the
+/// x letters X) and O(n^2) for the Bernoulli row; at N = 20 about 3.5e7 products (counted). Memory: the
 /// tables of words used as factors (about 7.6e5 entries at N = 20), the Lyndon bit sets (2^N bits) and the
 /// coefficients. The first letter Y variant follows from log(e^Y e^X) = -log(e^-X e^-Y): c_l changes by (-1)^(n+1).
 /// </para>
@@ -51,17 +51,14 @@ internal static class BchDualBasisSolver
     /// The non-zero Lyndon coordinates of log(e^A e^B) in degrees 1..N, by degree then word; words are written with the
     /// letters <paramref name="smallLetter"/> (bit 0) and <paramref name="largeLetter"/> (bit 1). <paramref name="firstIsSmall"/>:
     /// A is the smaller letter. Null when even eight primes are too few (the caller then uses another variant).
-    /// <paramref name="allPrimes"/> runs the second pair of primes even when the first suffices (tests).
+    /// <paramref name="allPrimes"/> runs the second set of four primes even when the first suffices (tests).
     /// </summary>
     public static (LyndonWord Word, Rational Coefficient)[]? TrySolve(int degree, int smallLetter, int largeLetter, bool firstIsSmall, int? threads = null, bool allPrimes = false)
     {
-        var parallelism = threads ?? (Environment.GetEnvironmentVariable("BCHT") is { } t ? int.Parse(t) : Environment.ProcessorCount);
-        var sw = System.Diagnostics.Stopwatch.StartNew();
+        var parallelism = threads ?? Environment.ProcessorCount;
         var plan = new BchDualBasisPlan(degree);
 
-        Console.WriteLine($"T plan {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
         var largest = DualBasisBound.Largest(plan);
-        Console.WriteLine($"T bound {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
         var scales = new BigInteger[degree + 1];
         var bitsNeeded = 0.0;
         for (var n = 1; n <= degree; n++)
@@ -80,7 +77,6 @@ internal static class BchDualBasisSolver
 
         var first = new DualBasisPass<ResidueQuad<FirstPrimeQuad>>(plan);
         first.Run(parallelism);
-        Console.WriteLine($"T pass {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
         var primes = ResidueQuad<FirstPrimeQuad>.Primes.ToList();
         DualBasisPass<ResidueQuad<SecondPrimeQuad>>? second = null;
         if (allPrimes || bitsNeeded >= ProductBits(primes) - 1)
@@ -95,8 +91,9 @@ internal static class BchDualBasisSolver
         }
 
         var crt = new Garner(primes);
-        var result = Assemble(plan, first.Coefficients, second?.Coefficients, primes, scales, crt, parallelism, (n, code) => ToLyndonWord(code, n, smallLetter, largeLetter), !firstIsSmall);
-        Console.WriteLine($"T out {sw.ElapsedMilliseconds} ms {GC.GetTotalAllocatedBytes(true) >> 20} MB");
+        // 128-bit reconstruction when |D_n c_l| < 2^127 is proved (bitsNeeded counts the sign bit).
+        var narrow = bitsNeeded <= 127;
+        var result = Assemble(plan, first.Coefficients, second?.Coefficients, primes, scales, crt, narrow, parallelism, (n, code) => ToLyndonWord(code, n, smallLetter, largeLetter), !firstIsSmall);
         return result;
     }
 
@@ -108,6 +105,7 @@ internal static class BchDualBasisSolver
         List<ulong> primes,
         BigInteger[] scales,
         Garner crt,
+        bool narrow,
         int parallelism,
         Func<int, int, LyndonWord> word,
         bool largeFirst)
@@ -159,8 +157,19 @@ internal static class BchDualBasisSolver
                     residues[lane] = (ulong)((UInt128)residues[lane] * scaleResidues[n][lane] % primes[lane]);
                 }
 
-                var value = crt.Symmetric(residues);
-                result[at++] = (word(n, words[r]), Reduced(negate ? -value : value, scales[n]));
+                Rational coefficient;
+                if (narrow)
+                {
+                    var value = crt.Symmetric128(residues);
+                    coefficient = Reduced(negate ? -value : value, (UInt128)scales[n]);
+                }
+                else
+                {
+                    var value = crt.Symmetric(residues);
+                    coefficient = new Rational(negate ? -value : value, scales[n]);
+                }
+
+                result[at++] = (word(n, words[r]), coefficient);
             }
         });
 
@@ -169,28 +178,22 @@ internal static class BchDualBasisSolver
         bool IsZero(int n, int r) => first[n][r].IsZero && (second is null || second[n][r].IsZero);
     }
 
-    // numerator / denominator in lowest terms, the common factor found in 128-bit arithmetic when both fit.
-    private static Rational Reduced(BigInteger numerator, BigInteger denominator)
+    // value / D_n in lowest terms, by a binary greatest common divisor in 128-bit arithmetic.
+    private static Rational Reduced(Int128 value, UInt128 scale)
     {
-        if (numerator.IsZero || BigInteger.Abs(numerator).GetBitLength() >= 127 || denominator.GetBitLength() >= 127)
+        if (value == 0)
         {
-            return new Rational(numerator, denominator);
+            return Rational.Zero;
         }
 
-        var a = (UInt128)BigInteger.Abs(numerator);
-        var b = (UInt128)denominator;
-        var g = BinaryGcd(a, b);
-        var reduced = (BigInteger)(a / g);
-        return Rational.FromCanonical(numerator.Sign < 0 ? -reduced : reduced, (BigInteger)(b / g));
+        var numerator = (UInt128)Int128.Abs(value);
+        var g = BinaryGcd(numerator, scale);
+        var reduced = (BigInteger)(numerator / g);
+        return Rational.FromCanonical(value < 0 ? -reduced : reduced, (BigInteger)(scale / g));
     }
 
     private static UInt128 BinaryGcd(UInt128 a, UInt128 b)
     {
-        if (a == 0)
-        {
-            return b;
-        }
-
         var shift = (int)UInt128.TrailingZeroCount(a | b);
         a >>= (int)UInt128.TrailingZeroCount(a);
         while (b != 0)
@@ -220,12 +223,14 @@ internal static class BchDualBasisSolver
         return LyndonWord.FromTrusted(new Word(letters));
     }
 
-    // Garner's mixed-radix form of the Chinese remainder theorem, to the representative in (-M/2, M/2].
+    // Garner's mixed-radix form of the Chinese remainder theorem, to the representative in (-M/2, M/2] (M the product
+    // of the primes, all below 2^26, so digit arithmetic fits in 64 bits).
     private sealed class Garner
     {
         private readonly ulong[] _primes;
         private readonly ulong[][] _inverses;
         private readonly BigInteger[] _radices;
+        private readonly UInt128[] _wrappedRadices;
         private readonly BigInteger _modulus;
 
         public Garner(List<ulong> primes)
@@ -233,10 +238,12 @@ internal static class BchDualBasisSolver
             _primes = primes.ToArray();
             _inverses = new ulong[_primes.Length][];
             _radices = new BigInteger[_primes.Length];
+            _wrappedRadices = new UInt128[_primes.Length];
             BigInteger radix = 1;
             for (var i = 0; i < _primes.Length; i++)
             {
                 _radices[i] = radix;
+                _wrappedRadices[i] = (UInt128)(radix & UInt128.MaxValue);
                 radix *= _primes[i];
                 _inverses[i] = new ulong[i];
                 for (var j = 0; j < i; j++)
@@ -248,47 +255,63 @@ internal static class BchDualBasisSolver
             _modulus = radix;
         }
 
-        public BigInteger Symmetric(ReadOnlySpan<ulong> residues)
+        /// <summary>
+        /// The representative as a 128-bit integer, given that its magnitude is below 2^127 and below the product of all
+        /// primes but the last (then the last mixed-radix digit is 0 for a non-negative value and p - 1 for a negative
+        /// one); when the product of the primes is below 2^127 it is compared with M/2 directly.
+        /// </summary>
+        public Int128 Symmetric128(ReadOnlySpan<ulong> residues)
         {
-            if (_primes.Length == 4)
+            Span<ulong> digits = stackalloc ulong[_primes.Length];
+            Digits(residues, digits);
+            UInt128 wrapped = 0;
+            for (var i = 0; i < digits.Length; i++)
             {
-                // Mixed-radix digits below 2^26, so products fit in 64 bits; the value is below 2^104.
-                Span<ulong> d = stackalloc ulong[4];
-                UInt128 x = 0;
-                UInt128 radix = 1;
-                for (var i = 0; i < 4; i++)
-                {
-                    var p = _primes[i];
-                    var v = residues[i] % p;
-                    for (var j = 0; j < i; j++)
-                    {
-                        v = (v + p - (d[j] % p)) % p * _inverses[i][j] % p;
-                    }
-
-                    d[i] = v;
-                    x += radix * v;
-                    radix *= p;
-                }
-
-                return x > radix / 2 ? -(BigInteger)(radix - x) : (BigInteger)x;
+                wrapped += _wrappedRadices[i] * digits[i];
             }
 
+            if (_modulus.GetBitLength() < 127)
+            {
+                var modulus = (UInt128)_modulus;
+                return wrapped > modulus / 2 ? -(Int128)(modulus - wrapped) : (Int128)wrapped;
+            }
+
+            var top = digits[^1];
+            if (top != 0 && top != _primes[^1] - 1)
+            {
+                throw new InvalidOperationException("The residues do not come from an integer within the proved bound.");
+            }
+
+            return top == 0 ? (Int128)wrapped : (Int128)(wrapped - (UInt128)(_modulus & UInt128.MaxValue));
+        }
+
+        /// <summary>The representative in (-M/2, M/2] as a big integer.</summary>
+        public BigInteger Symmetric(ReadOnlySpan<ulong> residues)
+        {
             Span<ulong> digits = stackalloc ulong[_primes.Length];
+            Digits(residues, digits);
             BigInteger value = 0;
+            for (var i = 0; i < digits.Length; i++)
+            {
+                value += _radices[i] * digits[i];
+            }
+
+            return value * 2 > _modulus ? value - _modulus : value;
+        }
+
+        private void Digits(ReadOnlySpan<ulong> residues, Span<ulong> digits)
+        {
             for (var i = 0; i < _primes.Length; i++)
             {
                 var p = _primes[i];
                 var x = residues[i] % p;
                 for (var j = 0; j < i; j++)
                 {
-                    x = (ulong)((UInt128)((x + p - (digits[j] % p)) % p) * _inverses[i][j] % p);
+                    x = (x + p - (digits[j] % p)) % p * _inverses[i][j] % p;
                 }
 
                 digits[i] = x;
-                value += _radices[i] * x;
             }
-
-            return value * 2 > _modulus ? value - _modulus : value;
         }
     }
 }

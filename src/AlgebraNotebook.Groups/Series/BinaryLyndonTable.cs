@@ -19,18 +19,22 @@ internal sealed class BinaryLyndonTable
 
     /// <summary>The table for length n; <paramref name="withFactors"/> false leaves out the prefix and suffix bit sets.</summary>
     public BinaryLyndonTable(int n, bool withFactors = true)
+        : this(n, EnumerateCodes(n).ToArray(), withFactors)
+    {
+    }
+
+    // The table of length n from its words (increasing).
+    private BinaryLyndonTable(int n, int[] words, bool withFactors)
     {
         Length = n;
         var size = 1L << n;
         _bits = new ulong[Math.Max(1, size >> 6)];
-        var words = new List<int>();
-        foreach (var code in EnumerateCodes(n))
+        foreach (var code in words)
         {
-            words.Add(code);
             _bits[code >> 6] |= 1UL << (code & 63);
         }
 
-        Words = words.ToArray();
+        Words = words;
         _blockRanks = new int[_bits.Length];
         var running = 0;
         for (var i = 0; i < _bits.Length; i++)
@@ -133,6 +137,53 @@ internal sealed class BinaryLyndonTable
         }
 
         return bestLength;
+    }
+
+    /// <summary>
+    /// The tables of lengths 1..n without the prefix and suffix bit sets (index 0 unused), from one run of Duval's
+    /// generation (which yields the Lyndon words of every length up to n, each length in increasing order).
+    /// </summary>
+    public static BinaryLyndonTable[] UpTo(int n)
+    {
+        var words = new List<int>[n + 1];
+        for (var m = 1; m <= n; m++)
+        {
+            words[m] = new List<int>((int)FreeLie.LyndonWord.CountByWitt(2, m));
+        }
+
+        var w = new int[n];
+        var length = 1;
+        w[0] = -1;
+        while (length > 0)
+        {
+            w[length - 1]++;
+            var code = 0;
+            for (var i = 0; i < length; i++)
+            {
+                code = (code << 1) | w[i];
+            }
+
+            words[length].Add(code);
+            var m = length;
+            while (length < n)
+            {
+                w[length] = w[length - m];
+                length++;
+            }
+
+            while (length > 0 && w[length - 1] == 1)
+            {
+                length--;
+            }
+        }
+
+        var tables = new BinaryLyndonTable[n + 1];
+        for (var m = 1; m <= n; m++)
+        {
+            tables[m] = new BinaryLyndonTable(m, words[m].ToArray(), withFactors: false);
+        }
+
+        return tables;
     }
 
     // Duval's generation of the Lyndon words of length n on two letters, in increasing order.

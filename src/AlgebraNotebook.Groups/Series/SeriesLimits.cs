@@ -6,7 +6,7 @@ namespace AlgebraNotebook.Groups.Series;
 /// Size cap for the series computations, which work in the free associative algebra truncated after degree N: that
 /// algebra has k + k^2 + ... + k^N words on k generators. A request above <see cref="MaxAssociativeWords"/> is refused
 /// with a <see cref="BeyondCapabilityException"/> that states the estimated size, instead of running for hours. The
-/// two-generator series log(e^X e^Y) by word coefficients (<see cref="BakerCampbellHausdorffMethod.WordCoefficientRows"/>, <see cref="BakerCampbellHausdorffMethod.WordCoefficients"/>)
+/// two-generator series log(e^X e^Y) by the dual basis or by word coefficients (<see cref="BakerCampbellHausdorffMethod.DualBasis"/>, <see cref="BakerCampbellHausdorffMethod.WordCoefficientRows"/>, <see cref="BakerCampbellHausdorffMethod.WordCoefficients"/>)
 /// never forms that algebra; its own cap is the degree <see cref="MaxWordCoefficientDegree"/>.
 /// </summary>
 public sealed class SeriesLimits
@@ -15,8 +15,10 @@ public sealed class SeriesLimits
     public static SeriesLimits Default { get; } = new(1 << 18);
 
     /// <summary>
-    /// The default degree cap of the word-coefficient methods: 22. Their time grows about threefold per degree (row
-    /// variant, measured: degree 20 6-8 s, degree 22 74 s of processor time), so degree 22 is already minutes.
+    /// The default degree cap of the word-coefficient methods: 22. Time grows about twofold per degree with the default
+    /// dual-basis variant (measured whole runs: degree 22 a few seconds, degree 24 under 20 s) and three- to fivefold
+    /// with the row and column variants (row variant: degree 22 74 s of processor time), so degree 24 needs a
+    /// <see cref="SeriesLimits"/> with a larger cap.
     /// </summary>
     public const int DefaultMaxWordCoefficientDegree = 22;
 
@@ -91,7 +93,7 @@ public sealed class SeriesLimits
         {
             throw new BeyondCapabilityException(
                 $"The {what} to degree {degree} is above the degree cap {MaxWordCoefficientDegree} of the word-coefficient method " +
-                $"(time grows about threefold per degree; at most {WordCoefficientDegreeLimit} is possible). Lower the degree or pass a SeriesLimits with a larger degree cap.");
+                $"(time grows about twofold per degree with the default method, faster with the others; at most {WordCoefficientDegreeLimit} is possible). Lower the degree or pass a SeriesLimits with a larger degree cap.");
         }
     }
 
