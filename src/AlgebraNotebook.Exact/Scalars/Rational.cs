@@ -108,6 +108,20 @@ public readonly partial struct Rational :
     /// <summary>Builds a rational from numerator and denominator that the caller guarantees canonical.</summary>
     internal static Rational FromCanonical(BigInteger numerator, BigInteger denominator) => new(numerator, denominator, alreadyCanonical: true);
 
+    /// <summary>
+    /// Builds a rational from a numerator and denominator - 1 (the stored form) that the caller guarantees canonical, so
+    /// that many rationals can share one stored denominator.
+    /// </summary>
+    internal static Rational FromCanonicalStored(BigInteger numerator, BigInteger denominatorMinusOne) => new(numerator, denominatorMinusOne, stored: 0);
+
+    // The stored form as given (see FromCanonicalStored).
+    private Rational(BigInteger numerator, BigInteger denominatorMinusOne, byte stored)
+    {
+        _ = stored;
+        _numerator = numerator;
+        _denominatorMinusOne = denominatorMinusOne;
+    }
+
     /// <summary>Implicit conversion from <see cref="int"/>.</summary>
     public static implicit operator Rational(int value) => new(new BigInteger(value));
 

@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using AlgebraNotebook.Exact.Scalars;
 
 namespace AlgebraNotebook.Groups.Series;
@@ -15,6 +16,7 @@ internal sealed class BchDualBasisPlan
     private readonly int[] _keptCounts;
 
     /// <summary>The plan for degrees 1..<paramref name="degree"/> (at most <see cref="BinaryLyndonTable.MaxDegree"/>).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public BchDualBasisPlan(int degree)
     {
         Degree = degree;
@@ -107,6 +109,7 @@ internal sealed class BchDualBasisPlan
     public int KeptSlot(int m, int rank) => _keptSlots[m][rank];
 
     /// <summary>Lyndon factorisation (Duval) of a word of the given length; starts[0..count] are the factor boundaries.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static int LyndonFactorisation(int code, int length, Span<int> starts)
     {
         var count = 0;

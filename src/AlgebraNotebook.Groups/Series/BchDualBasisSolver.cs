@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Groups.FreeLie;
 
@@ -58,7 +59,7 @@ internal static class BchDualBasisSolver
         var parallelism = threads ?? Environment.ProcessorCount;
         var plan = new BchDualBasisPlan(degree);
 
-        var largest = DualBasisBound.Largest(plan);
+        var largest = DualBasisBound.Largest(plan, parallelism);
         var scales = new BigInteger[degree + 1];
         var bitsNeeded = 0.0;
         for (var n = 1; n <= degree; n++)
@@ -135,6 +136,7 @@ internal static class BchDualBasisSolver
             var words = plan.Words(n);
             var negate = largeFirst && n % 2 == 0;
             Span<ulong> residues = stackalloc ulong[primes.Count];
+            var denominators = new Dictionary<UInt128, BigInteger>();
             for (var r = start; r < end; r++)
             {
                 if (IsZero(n, r))
@@ -161,7 +163,7 @@ internal static class BchDualBasisSolver
                 if (narrow)
                 {
                     var value = crt.Symmetric128(residues);
-                    coefficient = Reduced(negate ? -value : value, (UInt128)scales[n]);
+                    coefficient = Reduced(negate ? -value : value, (UInt128)scales[n], denominators);
                 }
                 else
                 {
@@ -178,8 +180,10 @@ internal static class BchDualBasisSolver
         bool IsZero(int n, int r) => first[n][r].IsZero && (second is null || second[n][r].IsZero);
     }
 
-    // value / D_n in lowest terms, by a binary greatest common divisor in 128-bit arithmetic.
-    private static Rational Reduced(Int128 value, UInt128 scale)
+    // value / D_n in lowest terms, by a binary greatest common divisor in 128-bit arithmetic; equal denominators share
+    // one stored big integer through the cache.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static Rational Reduced(Int128 value, UInt128 scale, Dictionary<UInt128, BigInteger> denominators)
     {
         if (value == 0)
         {
@@ -189,9 +193,17 @@ internal static class BchDualBasisSolver
         var numerator = (UInt128)Int128.Abs(value);
         var g = BinaryGcd(numerator, scale);
         var reduced = (BigInteger)(numerator / g);
-        return Rational.FromCanonical(value < 0 ? -reduced : reduced, (BigInteger)(scale / g));
+        var denominator = scale / g;
+        if (!denominators.TryGetValue(denominator, out var stored))
+        {
+            stored = (BigInteger)denominator - BigInteger.One;
+            denominators.Add(denominator, stored);
+        }
+
+        return Rational.FromCanonicalStored(value < 0 ? -reduced : reduced, stored);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static UInt128 BinaryGcd(UInt128 a, UInt128 b)
     {
         var shift = (int)UInt128.TrailingZeroCount(a | b);
@@ -212,6 +224,7 @@ internal static class BchDualBasisSolver
 
     private static double ProductBits(List<ulong> primes) => primes.Sum(p => Math.Log2(p));
 
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static LyndonWord ToLyndonWord(int code, int n, int small, int large)
     {
         Span<int> letters = stackalloc int[n];
@@ -260,6 +273,7 @@ internal static class BchDualBasisSolver
         /// primes but the last (then the last mixed-radix digit is 0 for a non-negative value and p - 1 for a negative
         /// one); when the product of the primes is below 2^127 it is compared with M/2 directly.
         /// </summary>
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         public Int128 Symmetric128(ReadOnlySpan<ulong> residues)
         {
             Span<ulong> digits = stackalloc ulong[_primes.Length];
@@ -299,6 +313,7 @@ internal static class BchDualBasisSolver
             return value * 2 > _modulus ? value - _modulus : value;
         }
 
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
         private void Digits(ReadOnlySpan<ulong> residues, Span<ulong> digits)
         {
             for (var i = 0; i < _primes.Length; i++)

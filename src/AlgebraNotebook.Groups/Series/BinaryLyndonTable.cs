@@ -1,4 +1,5 @@
 using System.Numerics;
+using System.Runtime.CompilerServices;
 
 namespace AlgebraNotebook.Groups.Series;
 
@@ -143,6 +144,7 @@ internal sealed class BinaryLyndonTable
     /// The tables of lengths 1..n without the prefix and suffix bit sets (index 0 unused), from one run of Duval's
     /// generation (which yields the Lyndon words of every length up to n, each length in increasing order).
     /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BinaryLyndonTable[] UpTo(int n)
     {
         var words = new List<int>[n + 1];

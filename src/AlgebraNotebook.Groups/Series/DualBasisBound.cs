@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using System.Numerics;
 using System.Runtime.CompilerServices;
 
@@ -14,13 +15,14 @@ namespace AlgebraNotebook.Groups.Series;
 /// </summary>
 internal static class DualBasisBound
 {
-    /// <summary>Bound on max |c_l| over Lyndon words l of each length 1..N (index 0 unused).</summary>
-    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    public static double[] Largest(BchDualBasisPlan plan)
+    /// <summary>
+    /// Bound on max |c_l| over Lyndon words l of each length 1..N (index 0 unused); the classes of one length run on up
+    /// to <paramref name="parallelism"/> threads.
+    /// </summary>
+    public static double[] Largest(BchDualBasisPlan plan, int parallelism = 1)
     {
         var n = plan.Degree;
         var tables = new PairingTables<MagnitudeBound>(plan);
-        var s = tables.NewScratch();
         var bound = new MagnitudeBound[][]?[n + 1][];
         var largest = new double[n + 1];
         for (var m = 1; m <= n; m++)
@@ -33,65 +35,81 @@ internal static class DualBasisBound
         bound[1][0] = [[tables.One]];
 
         var patterns = RootPatterns(plan);
-        var firstRow = new MagnitudeBound[n + 1];
+        var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, parallelism) };
+        var pool = new ConcurrentBag<PairingTables<MagnitudeBound>.Scratch>();
         for (var m = 2; m <= n; m++)
         {
-            var wantTable = m < n;
-            var first = wantTable ? firstRow.AsSpan(0, m) : [];
-            for (var x = 1; x < m; x++)
+            var length = m;
+            var byClass = new double[m];
+            Parallel.For(1, m, options, () => pool.TryTake(out var s) ? s : tables.NewScratch(), (x, _, s) =>
             {
-                var table = wantTable ? Empty(m, x) : null;
-                var previous = bound[m - 1][x - 1];
-                if (previous is not null)
-                {
-                    var c = tables.DeriveFromTable(m, x, new PairingTable<MagnitudeBound>(null, previous, 0), s, first);
-                    largest[m] = Math.Max(largest[m], c.Value);
-                    for (var i = 0; table is not null && i <= x; i++)
-                    {
-                        Absorb(table[i], i == 0 ? firstRow : previous[i - 1]);
-                    }
-                }
+                byClass[x] = Class(tables, bound, patterns[length][x], length, x, s);
+                return s;
+            }, pool.Add);
+            largest[m] = byClass.Max();
+        }
 
-                foreach (var pattern in patterns[m][x] ?? [])
-                {
-                    var rows = 0;
-                    var columns = 0;
-                    foreach (var (length, factorX, power) in pattern)
-                    {
-                        var factor = new PairingTable<MagnitudeBound>(null, bound[length][factorX]!, 0);
-                        for (var e = 0; e < power; e++)
-                        {
-                            if (columns == 0)
-                            {
-                                PairingTables<MagnitudeBound>.Load(factor, length, factorX, s);
-                            }
-                            else
-                            {
-                                tables.Multiply(rows, columns, factor, length, factorX, s);
-                            }
+        return largest;
+    }
 
-                            rows += factorX;
-                            columns += length;
-                        }
-
-                        if (power > 1)
-                        {
-                            tables.DivideByFactorial(rows, columns, power, s);
-                        }
-                    }
-
-                    var c = tables.DeriveFromProduct(m, x, s, first);
-                    largest[m] = Math.Max(largest[m], c.Value);
-                    for (var i = 0; table is not null && i <= x; i++)
-                    {
-                        Absorb(table[i], i == 0 ? firstRow : s.Product.AsSpan(((i - 1) * s.Stride) + 1, m - i));
-                    }
-                }
-
-                bound[m][x] = table;
+    // The bound table of class (m, x), from the class (m - 1, x - 1) by one chain step and from the root patterns of
+    // the class; returns the bound on |c_l| for the class.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    private static double Class(PairingTables<MagnitudeBound> tables, MagnitudeBound[][]?[][] bound, List<(int Length, int X, int Power)[]>? patterns, int m, int x, PairingTables<MagnitudeBound>.Scratch s)
+    {
+        var wantTable = m < tables.Degree;
+        var firstRow = new MagnitudeBound[m];
+        var first = wantTable ? firstRow.AsSpan() : [];
+        var table = wantTable ? Empty(m, x) : null;
+        var largest = 0.0;
+        var previous = bound[m - 1][x - 1];
+        if (previous is not null)
+        {
+            var c = tables.DeriveFromTable(m, x, new PairingTable<MagnitudeBound>(null, previous, 0), s, first);
+            largest = Math.Max(largest, c.Value);
+            for (var i = 0; table is not null && i <= x; i++)
+            {
+                Absorb(table[i], i == 0 ? firstRow : previous[i - 1]);
             }
         }
 
+        foreach (var pattern in patterns ?? [])
+        {
+            var rows = 0;
+            var columns = 0;
+            foreach (var (length, factorX, power) in pattern)
+            {
+                var factor = new PairingTable<MagnitudeBound>(null, bound[length][factorX]!, 0);
+                for (var e = 0; e < power; e++)
+                {
+                    if (columns == 0)
+                    {
+                        PairingTables<MagnitudeBound>.Load(factor, length, factorX, s);
+                    }
+                    else
+                    {
+                        tables.Multiply(rows, columns, factor, length, factorX, s);
+                    }
+
+                    rows += factorX;
+                    columns += length;
+                }
+
+                if (power > 1)
+                {
+                    tables.DivideByFactorial(rows, columns, power, s);
+                }
+            }
+
+            var c = tables.DeriveFromProduct(m, x, s, first);
+            largest = Math.Max(largest, c.Value);
+            for (var i = 0; table is not null && i <= x; i++)
+            {
+                Absorb(table[i], i == 0 ? firstRow : s.Product.AsSpan(((i - 1) * s.Stride) + 1, m - i));
+            }
+        }
+
+        bound[m][x] = table;
         return largest;
     }
 
@@ -121,6 +139,7 @@ internal static class DualBasisBound
 
     // The distinct factor patterns (factor length, letters X, repetition of the same word) of the roots, by class; the
     // key of a pattern is its numbers as characters, looked up without allocating.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private static List<(int Length, int X, int Power)[]>?[][] RootPatterns(BchDualBasisPlan plan)
     {
         var n = plan.Degree;

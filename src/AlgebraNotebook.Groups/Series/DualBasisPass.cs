@@ -136,6 +136,7 @@ internal sealed class DualBasisPass<T>
     }
 
     // t_l' for l' (code, length) as the product in s; returns the number of letters X of l'.
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private int ProductOfFactors(int code, int length, PairingTables<T>.Scratch s)
     {
         Span<int> starts = stackalloc int[length + 1];
