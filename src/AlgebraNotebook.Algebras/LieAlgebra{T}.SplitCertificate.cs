@@ -1,0 +1,196 @@
+using AlgebraNotebook.Algebras.Internal;
+using AlgebraNotebook.Exact.Matrices;
+using AlgebraNotebook.Exact.Scalars;
+using SF = AlgebraNotebook.Algebras.Internal.SmallPrimeField;
+
+namespace AlgebraNotebook.Algebras;
+
+public sealed partial class LieAlgebra<T>
+{
+    private const int NonSplitPrimeBudget = 6;
+
+    /// <summary>True for the fields the certificate handles: Q and Q(i).</summary>
+    private static bool HasNonSplitCertificate => typeof(T) == typeof(Rational) || typeof(T) == typeof(GaussianRational);
+
+    /// <summary>
+    /// The primes the certificate uses: every prime below 2^31 over Q; over Q(i) only primes p = 1 (mod 4), where -1 is
+    /// a square modulo p, so that every element of Q(i) integral at p has a residue in the prime field.
+    /// </summary>
+    private static bool UsablePrime(long p) => typeof(T) != typeof(GaussianRational) || p % 4 == 1;
+
+    /// <summary>
+    /// A proof, from arithmetic modulo primes, that the matrix m (rational entries) has an eigenvalue outside the field
+    /// (Q or Q(i)), so it is not diagonalisable over the field. At primes p below 2^31 (downwards from 2^31 - 1, at most
+    /// <see cref="NonSplitPrimeBudget"/> of them, p not dividing a denominator, p = 1 (mod 4) over Q(i)) the polynomial q
+    /// of least degree with q(m) v = 0 for a random vector v (fixed seed) is found modulo p; q divides the characteristic
+    /// polynomial χ of m modulo p. Its squarefree part is factored by distinct degrees; an irreducible factor of degree
+    /// d ≥ 2 is the proof. Argument: χ is monic with p-integral coefficients, so its monic irreducible factors over Q have
+    /// p-integral coefficients (Gauss's lemma over the local ring Z_(p), from memory) and their reductions multiply to χ
+    /// modulo p; one of them, f, has the factor of degree d modulo p. If f had a root in Q, f would be linear; if it had
+    /// a root a + b i in Q(i), that root is integral over Z_(p), so a, b are p-integral (Z[i] is integrally closed), and
+    /// for p = 1 (mod 4) with ι² = -1 modulo p, f divides (t - a - b ι)(t - a + b ι) modulo p: linear factors only. Either
+    /// way no irreducible factor of degree 2 or more could appear. The converse is not claimed: null means no proof was
+    /// found (a non-rational entry, only linear factors at every prime tried, or m diagonalisable after all).
+    /// </summary>
+    /// <returns>The prime and the degree found, or null.</returns>
+    internal (long Prime, int Degree)? ProvedEigenvalueOutsideField(Matrix<T> m)
+    {
+        var n = m.RowCount;
+        if (!HasNonSplitCertificate || n < 2)
+        {
+            return null;
+        }
+
+        var exact = new Rational[n, n];
+        for (var i = 0; i < n; i++)
+        {
+            for (var j = 0; j < n; j++)
+            {
+                if (RationalPart<T>.TryToRational(m[i, j]) is not { } q)
+                {
+                    return null;
+                }
+
+                exact[i, j] = q;
+            }
+        }
+
+        var random = new Random(5501);
+        var p = 2147483649L;
+        for (var tried = 0; tried < NonSplitPrimeBudget; tried++)
+        {
+            do
+            {
+                p -= 2;
+            }
+            while (!UsablePrime(p) || !SF.IsPrime(p));
+
+            var residues = new long[n, n];
+            var usable = true;
+            for (var i = 0; i < n && usable; i++)
+            {
+                for (var j = 0; j < n && usable; j++)
+                {
+                    if (SF.FromRational(exact[i, j], p) is { } u)
+                    {
+                        residues[i, j] = u;
+                    }
+                    else
+                    {
+                        usable = false;
+                    }
+                }
+            }
+
+            if (!usable)
+            {
+                continue;
+            }
+
+            var degree = LargestFactorDegree(residues, Enumerable.Range(0, n).Select(_ => random.NextInt64(0, p)).ToArray(), p);
+            if (degree >= 2)
+            {
+                return (p, degree);
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>
+    /// The largest degree of an irreducible factor modulo p of the polynomial of least degree that annihilates v under a
+    /// (Krylov sequence v, a v, a^2 v, ... and its first linear dependency); 0 when v is zero.
+    /// </summary>
+    internal static int LargestFactorDegree(long[,] a, long[] v, long p)
+    {
+        var n = v.Length;
+        var system = new long[n, n + 1];
+        var current = v;
+        for (var k = 0; k <= n; k++)
+        {
+            for (var i = 0; i < n; i++)
+            {
+                system[i, k] = current[i];
+            }
+
+            var next = new long[n];
+            for (var i = 0; i < n; i++)
+            {
+                var s = 0L;
+                for (var j = 0; j < n; j++)
+                {
+                    s = (s + a[i, j] * current[j]) % p;
+                }
+
+                next[i] = s;
+            }
+
+            current = next;
+        }
+
+        var pivots = SF.RowReduce(system, p);
+        var m = 0;
+        while (m < pivots.Count && pivots[m] == m)
+        {
+            m++;
+        }
+
+        if (m == 0)
+        {
+            return 0;
+        }
+
+        // Column m of the reduced system: a^m v = sum over k < m of system[k, m] a^k v.
+        var q = new long[m + 1];
+        q[m] = 1;
+        for (var k = 0; k < m; k++)
+        {
+            q[k] = (p - system[k, m]) % p;
+        }
+
+        // Squarefree part q / gcd(q, q'), valid since the degree is below p.
+        var derivative = SF.Derivative(q, p);
+        var squarefree = derivative.Length == 0 ? q : SF.Monic(SF.Quotient(q, SF.Gcd(q, derivative, p), p), p);
+        return squarefree.Length < 2 ? 0 : SF.DistinctDegreeFactors(squarefree, p).Max(e => e.Degree);
+    }
+
+    /// <summary>
+    /// The verdict "not split" for the Cartan subalgebra of <see cref="CartanSubalgebra"/> when
+    /// <see cref="ProvedEigenvalueOutsideField"/> proves an eigenvalue of ad h outside the field, h a combination of its basis with small integer
+    /// coefficients (fixed seed, a few tries), or null. A split Cartan subalgebra has ad h diagonalisable over the field
+    /// for every h in it, so one such h suffices; the reference variant would then report "not split" as well, after
+    /// exact eigenvalue computations of ad of random elements of the same Cartan subalgebra.
+    /// </summary>
+    private RootDecomposition<T>? NotSplitByCertificate()
+    {
+        if (!HasNonSplitCertificate || !IsSemisimple)
+        {
+            return null;
+        }
+
+        var h = CartanCore();
+        var random = new Random(7919);
+        for (var attempt = 0; attempt < 3; attempt++)
+        {
+            var coefficients = h.Select(_ => random.Next(1, 10) * (random.Next(2) == 0 ? -1 : 1)).ToArray();
+            var y = Vectors<T>.Zero(Dimension);
+            for (var i = 0; i < h.Length; i++)
+            {
+                Vectors<T>.AddScaled(y, T.FromInteger(coefficients[i]), h[i]);
+            }
+
+            if (ProvedEigenvalueOutsideField(AdjointCore(y)) is { } proof)
+            {
+                var combination = string.Join(" + ", coefficients.Select((c, i) => $"({c}) h_{i + 1}"));
+                var note = $"the Cartan subalgebra found (CartanSubalgebra, basis h_1, ..., h_{h.Length}) is not split over {FieldOperations<T>.FieldName}: "
+                    + $"for h = {combination}, the characteristic polynomial of ad h has an irreducible factor of degree {proof.Degree} modulo the prime {proof.Prime}"
+                    + (typeof(T) == typeof(GaussianRational) ? " (= 1 mod 4)" : "")
+                    + $", which eigenvalues in {FieldOperations<T>.FieldName} would rule out"
+                    + (typeof(T) == typeof(Rational) ? "; complexify the algebra (Complexify) to work over Q(i)." : ".");
+                return new RootDecomposition<T>(ToElements(h), false, note, [], [], null, null);
+            }
+        }
+
+        return null;
+    }
+}
