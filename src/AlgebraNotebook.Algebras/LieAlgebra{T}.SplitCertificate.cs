@@ -33,7 +33,7 @@ public sealed partial class LieAlgebra<T>
     /// found (a non-rational entry, only linear factors at every prime tried, or m diagonalisable after all).
     /// </summary>
     /// <returns>The prime and the degree found, or null.</returns>
-    internal (long Prime, int Degree)? ProvedEigenvalueOutsideField(Matrix<T> m)
+    internal static (long Prime, int Degree)? ProvedEigenvalueOutsideField(Matrix<T> m)
     {
         var n = m.RowCount;
         if (!HasNonSplitCertificate || n < 2)
