@@ -13,10 +13,25 @@ public sealed partial class LieAlgebra<T>
     private static bool HasNonSplitCertificate => typeof(T) == typeof(Rational) || typeof(T) == typeof(GaussianRational);
 
     /// <summary>
-    /// The primes the certificate uses: every prime below 2^31 over Q; over Q(i) only primes p = 1 (mod 4), where -1 is
-    /// a square modulo p, so that every element of Q(i) integral at p has a residue in the prime field.
+    /// The primes the certificate uses, the largest below 2^31 first: every prime over Q; over Q(i) only primes
+    /// p = 1 (mod 4), where -1 is a square modulo p, so that every element of Q(i) integral at p has a residue in the
+    /// prime field. Found once per scalar type.
     /// </summary>
-    private static bool UsablePrime(long p) => typeof(T) != typeof(GaussianRational) || p % 4 == 1;
+    private static readonly long[] CertificatePrimes = FindCertificatePrimes();
+
+    private static long[] FindCertificatePrimes()
+    {
+        var primes = new List<long>();
+        for (var p = 2147483647L; primes.Count < NonSplitPrimeBudget; p -= 2)
+        {
+            if ((typeof(T) != typeof(GaussianRational) || p % 4 == 1) && SF.IsPrime(p))
+            {
+                primes.Add(p);
+            }
+        }
+
+        return primes.ToArray();
+    }
 
     /// <summary>
     /// A proof, from arithmetic modulo primes, that the matrix m (rational entries) has an eigenvalue outside the field
@@ -56,14 +71,8 @@ public sealed partial class LieAlgebra<T>
         }
 
         var random = new Random(5501);
-        var p = 2147483649L;
-        for (var tried = 0; tried < NonSplitPrimeBudget; tried++)
+        foreach (var p in CertificatePrimes)
         {
-            do
-            {
-                p -= 2;
-            }
-            while (!UsablePrime(p) || !SF.IsPrime(p));
 
             var residues = new long[n, n];
             var usable = true;
