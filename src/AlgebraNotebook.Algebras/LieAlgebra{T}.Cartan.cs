@@ -17,7 +17,8 @@ public sealed partial class LieAlgebra<T>
     /// (for regular x it is a Cartan subalgebra: Humphreys §15.3 and de Graaf, chapter on Cartan subalgebras, both from memory).
     /// Each candidate is verified (nilpotent, and equal to its normalizer, which for a Fitting null component follows
     /// from the exact rank computation that finds it) before it is returned; random choices use a fixed seed. Basis
-    /// elements whose ad is proved modulo primes to have an eigenvalue outside the field skip the exact diagonalisability test.
+    /// elements whose ad is proved modulo primes to have an eigenvalue outside the field, or proved not diagonalisable by the
+    /// square-free part of its characteristic polynomial, skip the exact diagonalisability test.
     /// </summary>
     /// <exception cref="BeyondCapabilityException">No verified Cartan subalgebra was found within the attempts (the message says how many).</exception>
     public IReadOnlyList<LieElement<T>> CartanSubalgebra() => ToElements(CartanCore());
@@ -280,8 +281,9 @@ public sealed partial class LieAlgebra<T>
             }
 
             // The exact eigen-decomposition is skipped when arithmetic modulo primes already proves an eigenvalue of
-            // ad e outside the field (then ad e is not diagonalisable over it, and the exact test would reject e too).
-            if (ProvedEigenvalueOutsideField(ad) is null && FieldOperations<T>.Eigen(ad).IsDiagonalisable)
+            // ad e outside the field, or the square-free part of its characteristic polynomial does not annihilate ad e
+            // (then ad e is not diagonalisable over the field, and the exact test would reject e too).
+            if (ProvedEigenvalueOutsideField(ad) is null && !ProvedNotDiagonalisable(ad) && FieldOperations<T>.Eigen(ad).IsDiagonalisable)
             {
                 diagonalisable.Add(e);
             }

@@ -107,6 +107,43 @@ public sealed partial class LieAlgebra<T>
     }
 
     /// <summary>
+    /// An exact proof that the matrix m is not diagonalisable over any field containing its entries: with s the
+    /// square-free part of its characteristic polynomial χ (exact, over the field of T), s(m) v ≠ 0 for a vector v of
+    /// small integers (fixed seed). A diagonalisable matrix has a square-free minimal polynomial, which divides χ and so
+    /// divides s, whence s(m) = 0. False means no proof (m may still be non-diagonalisable, or v unlucky). Cost: one
+    /// characteristic polynomial (Berkowitz) and deg s matrix-vector products, far below an exact eigen-decomposition.
+    /// </summary>
+    internal static bool ProvedNotDiagonalisable(Matrix<T> m)
+    {
+        var n = m.RowCount;
+        var s = UnivariatePolynomial.SquareFreePart(LinearAlgebra.CharacteristicPolynomial(m));
+        var random = new Random(4703);
+        var v = Enumerable.Range(0, n).Select(_ => T.FromInteger(random.Next(-3, 4))).ToArray();
+        var w = Vectors<T>.Zero(n);
+        for (var k = s.Degree; k >= 0; k--)
+        {
+            var next = new T[n];
+            for (var i = 0; i < n; i++)
+            {
+                var sum = s.Coefficient(k) * v[i];
+                for (var j = 0; j < n; j++)
+                {
+                    if (!w[j].IsZero && !m[i, j].IsZero)
+                    {
+                        sum += m[i, j] * w[j];
+                    }
+                }
+
+                next[i] = sum;
+            }
+
+            w = next;
+        }
+
+        return !Vectors<T>.IsZero(w);
+    }
+
+    /// <summary>
     /// The largest degree of an irreducible factor modulo p of the polynomial of least degree that annihilates v under a
     /// (Krylov sequence v, a v, a^2 v, ... and its first linear dependency); 0 when v is zero.
     /// </summary>

@@ -9,8 +9,9 @@ namespace AlgebraNotebook.Algebras.Tests;
 
 /// <summary>
 /// The proof modulo primes that a matrix has an eigenvalue outside Q or Q(i) (used to skip exact eigenvalue computations
-/// when the Cartan subalgebra found is not split), and the dispatcher's use of it: it must fire only when the exact
-/// reference would also say "not split", and never when the field contains the eigenvalues.
+/// when the Cartan subalgebra found is not split), the exact proof that a matrix is not diagonalisable (used by the
+/// Cartan-subalgebra search), and the dispatcher's use of the first: it must fire only when the exact reference would
+/// also say "not split", and never when the field contains the eigenvalues.
 /// </summary>
 public class SplitCertificateTests(ITestOutputHelper output)
 {
@@ -60,6 +61,21 @@ public class SplitCertificateTests(ITestOutputHelper output)
         var proof = LieAlgebra<GaussianRational>.ProvedEigenvalueOutsideField(companion);
         Assert.NotNull(proof);
         Assert.InRange(proof!.Value.Degree, 2, 3);
+    }
+
+    [Theory]
+    // A Jordan block (or a non-zero nilpotent matrix) is not diagonalisable; a matrix with distinct eigenvalues, a
+    // rotation generator and a scalar multiple of the identity are (common practice). Only the first two may be refused.
+    [InlineData("[[2, 1], [0, 2]]", true)]
+    [InlineData("[[0, 1, 0], [0, 0, 1], [0, 0, 0]]", true)]
+    [InlineData("[[1, 0, 0], [0, 1, 1], [0, 0, 1]]", true)]
+    [InlineData("[[1, 1], [0, 2]]", false)]
+    [InlineData("[[0, -1], [1, 0]]", false)]
+    [InlineData("[[3, 0], [0, 3]]", false)]
+    public void Square_free_part_of_the_characteristic_polynomial_refuses_only_non_diagonalisable_matrices(string matrix, bool refused)
+    {
+        Assert.Equal(refused, LieAlgebra<Rational>.ProvedNotDiagonalisable(Matrix.ParseRational(matrix)));
+        Assert.Equal(refused, LieAlgebra<GaussianRational>.ProvedNotDiagonalisable(Matrix.ParseGaussianRational(matrix)));
     }
 
     [Fact]
