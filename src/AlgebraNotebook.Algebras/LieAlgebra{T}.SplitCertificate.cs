@@ -227,7 +227,8 @@ public sealed partial class LieAlgebra<T>
 
             if (ProvedEigenvalueOutsideField(AdjointCore(y)) is { } proof)
             {
-                var combination = string.Join(" + ", coefficients.Select((c, i) => $"({c}) h_{i + 1}"));
+                var combination = LieElement<T>.Format(
+                    Enumerable.Range(1, h.Length).Select(i => $"h_{i}").ToArray(), coefficients.Select(c => T.FromInteger(c)).ToArray());
                 var note = $"the Cartan subalgebra found (CartanSubalgebra, basis h_1, ..., h_{h.Length}) is not split over {FieldOperations<T>.FieldName}: "
                     + $"for h = {combination}, the characteristic polynomial of ad h has an irreducible factor of degree {proof.Degree} modulo the prime {proof.Prime}"
                     + (typeof(T) == typeof(GaussianRational) ? " (= 1 mod 4)" : "")
