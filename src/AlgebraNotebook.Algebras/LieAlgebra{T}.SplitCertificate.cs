@@ -116,6 +116,12 @@ public sealed partial class LieAlgebra<T>
     internal static bool ProvedNotDiagonalisable(Matrix<T> m)
     {
         var n = m.RowCount;
+        if (typeof(T) != typeof(Rational) && TryRationalEntries(m) is { } rational)
+        {
+            // The same proof over Q, where the arithmetic is cheaper (e.g. the complexification of a real algebra).
+            return LieAlgebra<Rational>.ProvedNotDiagonalisable(rational);
+        }
+
         var s = UnivariatePolynomial.SquareFreePart(LinearAlgebra.CharacteristicPolynomial(m));
         var random = new Random(4703);
         var v = Enumerable.Range(0, n).Select(_ => T.FromInteger(random.Next(-3, 4))).ToArray();
@@ -141,6 +147,25 @@ public sealed partial class LieAlgebra<T>
         }
 
         return !Vectors<T>.IsZero(w);
+    }
+
+    private static Matrix<Rational>? TryRationalEntries(Matrix<T> m)
+    {
+        var entries = new Rational[m.RowCount, m.ColumnCount];
+        for (var i = 0; i < m.RowCount; i++)
+        {
+            for (var j = 0; j < m.ColumnCount; j++)
+            {
+                if (RationalPart<T>.TryToRational(m[i, j]) is not { } q)
+                {
+                    return null;
+                }
+
+                entries[i, j] = q;
+            }
+        }
+
+        return Matrix<Rational>.FromFunction(m.RowCount, m.ColumnCount, (i, j) => entries[i, j]);
     }
 
     /// <summary>
