@@ -41,7 +41,8 @@ public sealed partial class LieAlgebra<T>
     /// has an irreducible factor of degree at least 2 modulo a prime, p = 1 (mod 4) over Q(i), which eigenvalues in the
     /// field would rule out), the result "not split" with a note giving h, the prime and the degree, without the exact
     /// eigenvalue computations; otherwise <see cref="RootDecompositionReference"/>. The modular and reference variants give the same
-    /// output when both apply, and the reference reports "not split" whenever that proof exists. The conventions (order
+    /// output when both apply; when that proof exists the reference, working on the same Cartan subalgebra, cannot
+    /// report a split decomposition either. The conventions (order
     /// of roots, normalisation of root vectors, Bourbaki numbering) are those documented at
     /// <see cref="RootDecompositionReference"/>. Computed once per algebra and cached (the result is immutable).
     /// </summary>

@@ -229,8 +229,9 @@ public sealed partial class LieAlgebra<T>
     /// The verdict "not split" for the Cartan subalgebra of <see cref="CartanSubalgebra"/> when
     /// <see cref="ProvedEigenvalueOutsideField"/> proves an eigenvalue of ad h outside the field, h a combination of its basis with small integer
     /// coefficients (fixed seed, a few tries), or null. A split Cartan subalgebra has ad h diagonalisable over the field
-    /// for every h in it, so one such h suffices; the reference variant would then report "not split" as well, after
-    /// exact eigenvalue computations of ad of random elements of the same Cartan subalgebra.
+    /// for every h in it, so one such h suffices; the reference variant, which diagonalises ad of random elements of the
+    /// same Cartan subalgebra exactly, cannot report a split decomposition then (it reports "not split", or gives up when
+    /// every element it draws has repeated eigenvalues).
     /// </summary>
     private RootDecomposition<T>? NotSplitByCertificate()
     {
