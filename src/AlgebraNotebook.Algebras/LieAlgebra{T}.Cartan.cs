@@ -15,7 +15,10 @@ public sealed partial class LieAlgebra<T>
     /// collected, a maximal commuting set is chosen greedily, and the Fitting null component of ad x is taken for a
     /// random combination x of that set; (2) otherwise the Fitting null component of ad x for random elements x
     /// (for regular x it is a Cartan subalgebra: Humphreys §15.3 and de Graaf, chapter on Cartan subalgebras, both from memory).
-    /// Each candidate is verified (nilpotent and equal to its normalizer) before it is returned; random choices use a fixed seed.
+    /// Each candidate is verified (nilpotent, and equal to its normalizer, which for a Fitting null component follows
+    /// from the exact rank computation that finds it) before it is returned; random choices use a fixed seed. Basis
+    /// elements whose ad is proved modulo primes to have an eigenvalue outside the field, or proved not diagonalisable by the
+    /// square-free part of its characteristic polynomial, skip the exact diagonalisability test.
     /// </summary>
     /// <exception cref="BeyondCapabilityException">No verified Cartan subalgebra was found within the attempts (the message says how many).</exception>
     public IReadOnlyList<LieElement<T>> CartanSubalgebra() => ToElements(CartanCore());
@@ -33,13 +36,19 @@ public sealed partial class LieAlgebra<T>
     /// <summary>
     /// The root decomposition of a semisimple algebra with respect to a split Cartan subalgebra, with the Cartan matrix
     /// and the type. Dispatcher: <see cref="RootDecompositionModular"/> (fast, every result proved exactly) when it
-    /// applies, otherwise <see cref="RootDecompositionReference"/>; both give the same output when both apply. The
-    /// conventions (order of roots, normalisation of root vectors, Bourbaki numbering) are those documented at
+    /// applies; otherwise, when arithmetic modulo primes proves that the Cartan subalgebra of <see cref="CartanSubalgebra"/>
+    /// is not split over the field (for h a small integer combination of its basis, the characteristic polynomial of ad h
+    /// has an irreducible factor of degree at least 2 modulo a prime, p = 1 (mod 4) over Q(i), which eigenvalues in the
+    /// field would rule out), the result "not split" with a note giving h, the prime and the degree, without the exact
+    /// eigenvalue computations; otherwise <see cref="RootDecompositionReference"/>. The modular and reference variants give the same
+    /// output when both apply; when that proof exists the reference, working on the same Cartan subalgebra, cannot
+    /// report a split decomposition either. The conventions (order
+    /// of roots, normalisation of root vectors, Bourbaki numbering) are those documented at
     /// <see cref="RootDecompositionReference"/>. Computed once per algebra and cached (the result is immutable).
     /// </summary>
     /// <exception cref="ExactArgumentException">The algebra is not semisimple.</exception>
     public RootDecomposition<T> RootDecomposition() =>
-        _rootDecomposition ??= TryRootDecompositionModular(out _) ?? RootDecompositionReference();
+        _rootDecomposition ??= TryRootDecompositionModular(out _) ?? NotSplitByCertificate() ?? RootDecompositionReference();
 
     private RootDecomposition<T>? _rootDecomposition;
 
@@ -266,7 +275,16 @@ public sealed partial class LieAlgebra<T>
         foreach (var e in AllBasis())
         {
             var ad = AdjointCore(e);
-            if (ad.IsZero || FieldOperations<T>.Eigen(ad).IsDiagonalisable)
+            if (ad.IsZero)
+            {
+                diagonalisable.Add(e);
+                continue;
+            }
+
+            // The exact eigen-decomposition is skipped when arithmetic modulo primes already proves an eigenvalue of
+            // ad e outside the field, or the square-free part of its characteristic polynomial does not annihilate ad e
+            // (then ad e is not diagonalisable over the field, and the exact test would reject e too).
+            if (ProvedEigenvalueOutsideField(ad) is null && !ProvedNotDiagonalisable(ad) && FieldOperations<T>.Eigen(ad).IsDiagonalisable)
             {
                 diagonalisable.Add(e);
             }
@@ -281,6 +299,9 @@ public sealed partial class LieAlgebra<T>
             }
         }
 
+        // Candidates already rejected, by the direction of x: the Fitting null component of ad x depends only on the
+        // line through x (e.g. when the commuting set has one element, every attempt from it gives the same candidate).
+        var rejected = new HashSet<string>(StringComparer.Ordinal);
         var tried = 0;
         for (var attempt = 0; attempt < 2 * RandomAttempts; attempt++)
         {
@@ -292,13 +313,73 @@ public sealed partial class LieAlgebra<T>
             }
 
             tried++;
-            var fitting = Echelon(LinearAlgebra.NullSpace(AdjointCore(x).Pow(Dimension)).Select(Flatten));
-            if (fitting.Length > 0 && SubalgebraOnBasis(fitting).IsNilpotent && NormalizerCore(fitting).Length == fitting.Length)
+            var direction = DirectionKey(x);
+            if (rejected.Contains(direction))
+            {
+                continue;
+            }
+
+            var fitting = FittingNullComponent(x);
+            if (fitting.Length > 0 && (IsAbelianSpan(fitting) || SubalgebraOnBasis(fitting).IsNilpotent))
             {
                 return fitting;
             }
+
+            rejected.Add(direction);
         }
 
         throw new BeyondCapabilityException($"No Cartan subalgebra of {Label} was verified after {tried} random elements.");
+    }
+
+    // Pairwise commuting basis vectors span an abelian, hence nilpotent, subalgebra (the usual case for a Cartan
+    // subalgebra of a semisimple algebra); checked before the general test, which builds the structure constants.
+    private bool IsAbelianSpan(T[][] basis)
+    {
+        basis = basis.Select(Vectors<T>.ClearDenominators).ToArray();
+        for (var i = 0; i < basis.Length; i++)
+        {
+            for (var j = i + 1; j < basis.Length; j++)
+            {
+                if (!Vectors<T>.IsZero(BracketCore(basis[i], basis[j])))
+                {
+                    return false;
+                }
+            }
+        }
+
+        return true;
+    }
+
+    private static string DirectionKey(T[] x)
+    {
+        var p = Array.FindIndex(x, c => !c.IsZero);
+        return p < 0 ? "0" : string.Join(",", Vectors<T>.Scale(T.One / x[p], x));
+    }
+
+    /// <summary>
+    /// The Fitting null component of ad x, the union of the kernels of (ad x)^k, as a canonical (echelon) basis: the
+    /// kernel of A^k for the first k with rank A^(k+1) = rank A^k (A = ad x), found by multiplying by A one step at a
+    /// time, so a regular semisimple x costs two products instead of the n-th power. That rank equality also proves the
+    /// subspace self-normalizing: x lies in it ([x, x] = 0), so its normalizer lies in {y : [x, y] in ker A^k} =
+    /// ker A^(k+1) = ker A^k (Humphreys §15.1, Lemma A, from memory). Nilpotency is checked by the caller.
+    /// </summary>
+    private T[][] FittingNullComponent(T[] x)
+    {
+        var a = AdjointCore(x);
+        var power = a;
+        var kernel = LinearAlgebra.NullSpace(power);
+        for (var k = 1; k < Dimension && kernel.Count > 0 && kernel.Count < Dimension; k++)
+        {
+            var next = power * a;
+            if (Dimension - LinearAlgebra.Rank(next) == kernel.Count)
+            {
+                break;
+            }
+
+            power = next;
+            kernel = LinearAlgebra.NullSpace(power);
+        }
+
+        return Echelon(kernel.Select(Flatten));
     }
 }

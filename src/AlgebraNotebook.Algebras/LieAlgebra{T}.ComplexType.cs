@@ -31,12 +31,19 @@ public sealed partial class LieAlgebra<T>
     /// Bourbaki's numbering, checked against the roots layer's Cartan matrix and dimension; (7) steps 2-6 are repeated at
     /// a second prime and must give the same Cartan matrix. <see cref="ComplexifiedType.RestsOn"/> states what was proved
     /// and what was checked modulo the primes. Random choices use fixed seeds. Cost: the Killing form modulo p is about
-    /// n^4 / 2 operations, the rest about r n^3 per prime plus polynomial arithmetic of degree n - r.
+    /// n^4 / 2 operations, the rest about r n^3 per prime plus polynomial arithmetic of degree n - r. Computed once per
+    /// algebra and cached (the summary, the real-form name and the Casimir degrees share it).
     /// </summary>
     /// <exception cref="ExactArgumentException">The algebra is zero or not semisimple (decided exactly).</exception>
     /// <exception cref="BeyondCapabilityException">A structure constant is not rational, or no two primes among the
     /// examined ones gave the root system (the message says why the last one failed).</exception>
-    public ComplexifiedType TypeOfComplexification()
+    public ComplexifiedType TypeOfComplexification() => _complexifiedType ??= ComputeTypeOfComplexification();
+
+    // Cached after the first success (the result is immutable and the random choices are seeded, so a second call would
+    // give the same); failures are not cached and throw again.
+    private ComplexifiedType? _complexifiedType;
+
+    private ComplexifiedType ComputeTypeOfComplexification()
     {
         var n = Dimension;
         if (n == 0)
@@ -384,7 +391,7 @@ public sealed partial class LieAlgebra<T>
         }
 
         // (4) Factors of f by degree, largest degree first.
-        var byDegree = DistinctDegreeFactors(f, p);
+        var byDegree = SF.DistinctDegreeFactors(f, p);
         reason = $"no Frobenius orbit of roots spanned the dual of the Cartan subalgebra modulo {p}";
         var linear = byDegree.Where(e => e.Degree == 1).SelectMany(e => SF.Roots(e.Product, p, random)).ToList();
         foreach (var (d, product) in byDegree.OrderByDescending(e => e.Degree).Take(3))
@@ -425,31 +432,6 @@ public sealed partial class LieAlgebra<T>
         }
 
         return null;
-    }
-
-    private static List<(int Degree, long[] Product)> DistinctDegreeFactors(long[] f, long p)
-    {
-        var result = new List<(int, long[])>();
-        var rest = SF.Monic(f, p);
-        long[] frobenius = [0, 1];
-        for (var d = 1; rest.Length - 1 >= 2 * d; d++)
-        {
-            frobenius = SF.PowerModulo(frobenius, p, rest, p);
-            var g = SF.Gcd(rest, SF.Subtract(frobenius, [0, 1], p), p);
-            if (g.Length > 1)
-            {
-                result.Add((d, g));
-                rest = SF.Monic(SF.Quotient(rest, g, p), p);
-                frobenius = SF.Remainder(frobenius, rest, p);
-            }
-        }
-
-        if (rest.Length > 1)
-        {
-            result.Add((rest.Length - 1, rest));
-        }
-
-        return result;
     }
 
     /// <summary>One irreducible factor of degree d of a product of distinct irreducible factors of degree d (equal-degree splitting).</summary>

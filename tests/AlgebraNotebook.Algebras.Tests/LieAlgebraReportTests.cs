@@ -1,4 +1,5 @@
 using AlgebraNotebook.Algebras;
+using AlgebraNotebook.Algebras.Chevalley;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Roots;
@@ -34,5 +35,36 @@ public class LieAlgebraReportTests
         Assert.Null(report.RealForm);
         Assert.Null(report.QuadraticCasimir);
         Assert.Contains(report.Notes, n => n.Contains("Not semisimple", StringComparison.Ordinal));
+    }
+
+    [Theory]
+    // The Chevalley basis spans the split real form of its type (common practice; type from the Cartan classification),
+    // here hidden by a dense random change of basis (seed 11) in which the Cartan subalgebra found is not split over Q
+    // or Q(i). Split forms and the dimensions of their maximal compact subalgebras (Helgason, Differential Geometry, Lie
+    // Groups, and Symmetric Spaces, ch. X, Table V, from memory): sl(5,R) with so(5), 10; so(4,3) with so(4) + so(3), 9;
+    // sp(6,R) with u(3), 9; G2(2) with su(2) + su(2), 6. Degrees of the basic invariants (Humphreys, Reflection Groups
+    // and Coxeter Groups, §3.7, Table 1): A4 2, 3, 4, 5; B3 and C3 2, 4, 6; G2 2, 6.
+    [InlineData("A4", "sl(5,R)", 10, new[] { 2, 3, 4, 5 })]
+    [InlineData("B3", "so(4,3)", 9, new[] { 2, 4, 6 })]
+    [InlineData("C3", "sp(6,R)", 9, new[] { 2, 4, 6 })]
+    [InlineData("G2", "G2(2) (split)", 6, new[] { 2, 6 })]
+    public void Report_of_a_split_algebra_in_a_dense_basis_names_its_type_and_says_what_it_rests_on(
+        string type, string realForm, int compactDimension, int[] degrees)
+    {
+        var chevalley = ChevalleyBasis.Of(type);
+        var algebra = DenseBasisChange.Disguise(chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension), seed: 11);
+        var report = algebra.Describe();
+        Assert.Equal(CartanType.Parse(type), report.Summary.LeviFactorType);
+        Assert.NotNull(report.RealForm);
+        Assert.Contains(realForm, report.RealForm!.Candidates);
+        Assert.Equal(CartanType.Parse(type), report.RealForm.ComplexificationType);
+        Assert.Equal(compactDimension, report.RealForm.CompactDimension);
+        Assert.Equal(degrees, report.CasimirDegrees!.Degrees);
+
+        // No split Cartan subalgebra was found, so every statement of the type says what it rests on.
+        Assert.Contains("modulo", report.RealForm.TypeRestsOn);
+        Assert.Contains("modulo", report.CasimirDegrees.Statement);
+        Assert.Contains(report.Summary.Notes, n => n.Contains("not split over Q(i)", StringComparison.Ordinal));
+        Assert.Contains(report.Summary.Notes, n => n.Contains("TypeOfComplexification", StringComparison.Ordinal) && n.Contains("modulo", StringComparison.Ordinal));
     }
 }

@@ -238,6 +238,35 @@ internal static class SmallPrimeField
         return (Trim(q), Trim(r[..Math.Min(r.Length, dm)]));
     }
 
+    /// <summary>
+    /// Distinct-degree factorisation of a squarefree f of degree at least 1: for each d, the product of its monic
+    /// irreducible factors of degree d (gcd with t^(p^d) - t), in increasing d; the factor left at the end is irreducible.
+    /// </summary>
+    public static List<(int Degree, long[] Product)> DistinctDegreeFactors(long[] f, long p)
+    {
+        var result = new List<(int, long[])>();
+        var rest = Monic(f, p);
+        long[] frobenius = [0, 1];
+        for (var d = 1; rest.Length - 1 >= 2 * d; d++)
+        {
+            frobenius = PowerModulo(frobenius, p, rest, p);
+            var g = Gcd(rest, Subtract(frobenius, [0, 1], p), p);
+            if (g.Length > 1)
+            {
+                result.Add((d, g));
+                rest = Monic(Quotient(rest, g, p), p);
+                frobenius = Remainder(frobenius, rest, p);
+            }
+        }
+
+        if (rest.Length > 1)
+        {
+            result.Add((rest.Length - 1, rest));
+        }
+
+        return result;
+    }
+
     /// <summary>Reduced row echelon form in place (rows x cols, row-major); returns the pivot columns.</summary>
     public static List<int> RowReduce(long[,] a, long p)
     {

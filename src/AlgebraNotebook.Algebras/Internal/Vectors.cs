@@ -55,6 +55,35 @@ internal static class Vectors<T>
         return r;
     }
 
+    /// <summary>
+    /// v times the least common multiple of the denominators of its entries (both parts of a Gaussian rational), so the
+    /// entries are integers and products of them skip the rational normalisation; v itself for other scalar types.
+    /// Spans the same line as v.
+    /// </summary>
+    public static T[] ClearDenominators(T[] v)
+    {
+        var lcm = System.Numerics.BigInteger.One;
+        foreach (var e in v)
+        {
+            switch (e)
+            {
+                case Rational q:
+                    lcm = Lcm(lcm, q.Denominator);
+                    break;
+                case GaussianRational g:
+                    lcm = Lcm(Lcm(lcm, g.Real.Denominator), g.Imaginary.Denominator);
+                    break;
+                default:
+                    return v;
+            }
+        }
+
+        return lcm.IsOne ? v : Scale(T.FromInteger(lcm), v);
+    }
+
+    private static System.Numerics.BigInteger Lcm(System.Numerics.BigInteger a, System.Numerics.BigInteger b) =>
+        b.IsOne ? a : a / System.Numerics.BigInteger.GreatestCommonDivisor(a, b) * b;
+
     /// <summary>In-place a += s b.</summary>
     public static void AddScaled(T[] a, T s, T[] b)
     {

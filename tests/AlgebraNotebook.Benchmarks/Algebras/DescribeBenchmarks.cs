@@ -70,3 +70,67 @@ public class SimpleIdealsVariantBenchmarks
     [Benchmark(Baseline = true)]
     public int Reference() => _algebra.SimpleIdealsReference().Count;
 }
+
+/// <summary>
+/// <c>Describe()</c> of Chevalley algebras given in the dense random basis of seed 11 (the Algebras tests'
+/// DenseBasisChange, linked), where the Cartan subalgebra found is not split over Q or Q(i): the summary and the
+/// real-form name take the type from <c>TypeOfComplexification</c> after the root decompositions report "not split".
+/// A4 (sl(5), dimension 24) took 17-19 s before the not-split proof modulo primes and the cheaper Cartan-subalgebra
+/// search; target under 3 s. B3, C3, G2 check that the other dense cases do not get slower. Each iteration gets a
+/// freshly built algebra, so no cached result is reused.
+/// </summary>
+[WarmupCount(0)]
+[IterationCount(3)]
+public class DenseDescribeBenchmarks
+{
+    private LieAlgebra<Rational> _plain = null!;
+    private List<LieElement<Rational>> _basis = null!;
+    private LieAlgebra<Rational> _algebra = null!;
+
+    /// <summary>The Cartan type of the Chevalley algebra.</summary>
+    [Params("A4", "B3", "C3", "G2")]
+    public string Type { get; set; } = "A4";
+
+    /// <summary>Builds the Chevalley algebra and the dense basis (seed 11) once.</summary>
+    [GlobalSetup]
+    public void Prepare() => (_plain, _basis) = ComplexifiedTypeBenchmarks.DenseRandomBasis(Type, 11);
+
+    /// <summary>A fresh algebra in the dense basis before every iteration.</summary>
+    [IterationSetup]
+    public void Rebuild() => _algebra = _plain.InBasis(_basis);
+
+    /// <summary>The one-call description; returns its real-form name so the work cannot be skipped.</summary>
+    [Benchmark]
+    public string Describe() => _algebra.Describe().RealForm?.Name ?? "none";
+}
+
+/// <summary>
+/// The root decomposition of the complexification of A4 in the dense basis of seed 11, where the Cartan subalgebra found
+/// is not split over Q(i): the dispatcher (modular variant, then the proof modulo primes that the Cartan subalgebra is
+/// not split) beside the reference variant (exact eigenvalues of ad of random elements of the same Cartan subalgebra),
+/// which reaches the same verdict. Both include the Cartan-subalgebra search (a fresh algebra per iteration).
+/// </summary>
+[WarmupCount(0)]
+[IterationCount(2)]
+public class NotSplitVariantBenchmarks
+{
+    private LieAlgebra<Rational> _plain = null!;
+    private List<LieElement<Rational>> _basis = null!;
+    private LieAlgebra<GaussianRational> _algebra = null!;
+
+    /// <summary>Builds the Chevalley algebra of A4 and the dense basis once.</summary>
+    [GlobalSetup]
+    public void Prepare() => (_plain, _basis) = ComplexifiedTypeBenchmarks.DenseRandomBasis("A4", 11);
+
+    /// <summary>A fresh complexified algebra before every iteration.</summary>
+    [IterationSetup]
+    public void Rebuild() => _algebra = _plain.InBasis(_basis).Complexify();
+
+    /// <summary>The dispatcher: the modular variant, then the not-split proof modulo primes.</summary>
+    [Benchmark]
+    public bool Dispatcher() => _algebra.RootDecomposition().IsSplit;
+
+    /// <summary>The reference variant (test oracle).</summary>
+    [Benchmark(Baseline = true)]
+    public bool Reference() => _algebra.RootDecompositionReference().IsSplit;
+}
