@@ -147,10 +147,11 @@ internal sealed class BinaryLyndonTable
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public static BinaryLyndonTable[] UpTo(int n)
     {
-        var words = new List<int>[n + 1];
+        var words = new int[n + 1][];
+        var counts = new int[n + 1];
         for (var m = 1; m <= n; m++)
         {
-            words[m] = new List<int>((int)FreeLie.LyndonWord.CountByWitt(2, m));
+            words[m] = new int[(int)FreeLie.LyndonWord.CountByWitt(2, m)];
         }
 
         var w = new int[n];
@@ -165,7 +166,7 @@ internal sealed class BinaryLyndonTable
                 code = (code << 1) | w[i];
             }
 
-            words[length].Add(code);
+            words[length][counts[length]++] = code;
             var m = length;
             while (length < n)
             {
@@ -182,7 +183,7 @@ internal sealed class BinaryLyndonTable
         var tables = new BinaryLyndonTable[n + 1];
         for (var m = 1; m <= n; m++)
         {
-            tables[m] = new BinaryLyndonTable(m, words[m].ToArray(), withFactors: false);
+            tables[m] = new BinaryLyndonTable(m, words[m], withFactors: false);
         }
 
         return tables;

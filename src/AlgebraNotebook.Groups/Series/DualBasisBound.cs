@@ -23,16 +23,16 @@ internal static class DualBasisBound
     {
         var n = plan.Degree;
         var tables = new PairingTables<MagnitudeBound>(plan);
-        var bound = new MagnitudeBound[][]?[n + 1][];
+        var bound = new PairingTable<MagnitudeBound>?[n + 1][];
         var largest = new double[n + 1];
         for (var m = 1; m <= n; m++)
         {
-            bound[m] = new MagnitudeBound[][]?[m + 1];
+            bound[m] = new PairingTable<MagnitudeBound>?[m + 1];
         }
 
         // Length 1: X (coefficient 1, never a factor, no chain) and Y (t_Y(0, 1) = 1).
         largest[1] = 1;
-        bound[1][0] = [[tables.One]];
+        bound[1][0] = new PairingTable<MagnitudeBound>([tables.One], [0], null, 0);
 
         var patterns = RootPatterns(plan);
         var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, parallelism) };
@@ -55,21 +55,21 @@ internal static class DualBasisBound
     // The bound table of class (m, x), from the class (m - 1, x - 1) by one chain step and from the root patterns of
     // the class; returns the bound on |c_l| for the class.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
-    private static double Class(PairingTables<MagnitudeBound> tables, MagnitudeBound[][]?[][] bound, List<(int Length, int X, int Power)[]>? patterns, int m, int x, PairingTables<MagnitudeBound>.Scratch s)
+    private static double Class(PairingTables<MagnitudeBound> tables, PairingTable<MagnitudeBound>?[][] bound, List<(int Length, int X, int Power)[]>? patterns, int m, int x, PairingTables<MagnitudeBound>.Scratch s)
     {
         var wantTable = m < tables.Degree;
         var firstRow = new MagnitudeBound[m];
         var first = wantTable ? firstRow.AsSpan() : [];
-        var table = wantTable ? Empty(m, x) : null;
+        var offsets = new int[x + 1];
+        var data = wantTable ? new MagnitudeBound[PairingTable<MagnitudeBound>.Layout(m, x, 0, offsets, [])] : [];
         var largest = 0.0;
-        var previous = bound[m - 1][x - 1];
-        if (previous is not null)
+        if (bound[m - 1][x - 1] is { } previous)
         {
-            var c = tables.DeriveFromTable(m, x, new PairingTable<MagnitudeBound>(null, previous, 0), s, first);
+            var c = tables.DeriveFromTable(m, x, previous, s, first);
             largest = Math.Max(largest, c.Value);
-            for (var i = 0; table is not null && i <= x; i++)
+            for (var i = 0; wantTable && i <= x; i++)
             {
-                Absorb(table[i], i == 0 ? firstRow : previous[i - 1]);
+                Absorb(data.AsSpan(offsets[i], m - i), i == 0 ? firstRow : previous.Row(i - 1, m - 1));
             }
         }
 
@@ -79,7 +79,7 @@ internal static class DualBasisBound
             var columns = 0;
             foreach (var (length, factorX, power) in pattern)
             {
-                var factor = new PairingTable<MagnitudeBound>(null, bound[length][factorX]!, 0);
+                var factor = bound[length][factorX]!.Value;
                 for (var e = 0; e < power; e++)
                 {
                     if (columns == 0)
@@ -103,30 +103,18 @@ internal static class DualBasisBound
 
             var c = tables.DeriveFromProduct(m, x, s, first);
             largest = Math.Max(largest, c.Value);
-            for (var i = 0; table is not null && i <= x; i++)
+            for (var i = 0; wantTable && i <= x; i++)
             {
-                Absorb(table[i], i == 0 ? firstRow : s.Product.AsSpan(((i - 1) * s.Stride) + 1, m - i));
+                Absorb(data.AsSpan(offsets[i], m - i), i == 0 ? firstRow : s.Product.AsSpan(((i - 1) * s.Stride) + 1, m - i));
             }
         }
 
-        bound[m][x] = table;
+        bound[m][x] = wantTable ? new PairingTable<MagnitudeBound>(data, offsets, null, 0) : null;
         return largest;
     }
 
-    // Zero rows for a class (length m, x letters X); zero is below every bound.
-    private static MagnitudeBound[][] Empty(int m, int x)
-    {
-        var rows = new MagnitudeBound[x + 1][];
-        for (var i = 0; i <= x; i++)
-        {
-            rows[i] = new MagnitudeBound[m - i];
-        }
-
-        return rows;
-    }
-
     // The row := its entry-by-entry maximum with the candidate.
-    private static void Absorb(MagnitudeBound[] row, ReadOnlySpan<MagnitudeBound> candidate)
+    private static void Absorb(Span<MagnitudeBound> row, ReadOnlySpan<MagnitudeBound> candidate)
     {
         for (var k = 0; k < row.Length; k++)
         {

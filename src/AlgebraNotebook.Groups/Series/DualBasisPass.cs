@@ -75,7 +75,8 @@ internal sealed class DualBasisPass<T>
     }
 
     // A chain from its root (length n0, code, x0 letters X; for n0 at least 3 the product of the factors of its l' is
-    // in s), then the members X^j root. Rows are allocated only for the root and members up to the last kept member.
+    // in s), then the members X^j root. The root and the members up to the last kept one get one array for all their
+    // rows; the members after it continue in the thread's scratch, from a copy of the last kept member's table.
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private void Chain(int n0, int code, int x0, PairingTables<T>.Scratch s)
     {
@@ -90,47 +91,68 @@ internal sealed class DualBasisPass<T>
             }
         }
 
-        var wantRoot = n0 < n || highest >= 0;
-        var rootRows = s.RootRows;
+        // The block of member `base` (its rows as root rows) and of the first rows of the members after it.
+        T[] data;
+        int[] rootOffsets;
+        int[]? firstOffsets;
         if (highest >= 0)
         {
-            rootRows = new T[x0 + 1][];
-            for (var i = 0; i <= x0; i++)
-            {
-                rootRows[i] = new T[n0 - i];
-            }
-        }
-
-        if (n0 == 1)
-        {
-            rootRows[0][0] = _tables.One;
+            rootOffsets = new int[x0 + 1];
+            firstOffsets = highest >= 1 ? new int[highest + 1] : null;
+            data = new T[PairingTable<T>.Layout(n0, x0, highest, rootOffsets, firstOffsets)];
         }
         else
         {
-            Coefficients[n0][_plan.Rank(n0, code)] = _tables.DeriveFromProduct(n0, x0, s, wantRoot ? rootRows[0].AsSpan(0, n0) : []);
+            rootOffsets = s.ChainRootOffsets;
+            firstOffsets = s.ChainFirstOffsets;
+            data = s.ChainData;
+            PairingTable<T>.Layout(n0, x0, last, rootOffsets, firstOffsets);
+        }
+
+        var wantRoot = n0 < n || highest >= 0;
+        if (n0 == 1)
+        {
+            data[rootOffsets[0]] = _tables.One;
+        }
+        else
+        {
+            Coefficients[n0][_plan.Rank(n0, code)] = _tables.DeriveFromProduct(n0, x0, s, wantRoot ? data.AsSpan(rootOffsets[0], n0) : []);
             for (var i = 1; wantRoot && i <= x0; i++)
             {
-                s.Product.AsSpan(((i - 1) * s.Stride) + 1, n0 - i).CopyTo(rootRows[i]);
+                s.Product.AsSpan(((i - 1) * s.Stride) + 1, n0 - i).CopyTo(data.AsSpan(rootOffsets[i]));
             }
         }
 
-        var firstRows = highest >= 1 ? new T[last + 1][] : s.FirstRowList;
+        var baseMember = 0;
         for (var j = 0; j <= last; j++)
         {
             var m = n0 + j;
+            var x = x0 + j;
             if (j > 0)
             {
+                if (j == highest + 1 && highest >= 0 && m < n)
+                {
+                    // Past the last kept member: member j - 1's table becomes the root of the scratch block.
+                    var previous = new PairingTable<T>(data, rootOffsets, firstOffsets, j - 1 - baseMember);
+                    PairingTable<T>.Layout(m - 1, x - 1, last - (j - 1), s.ChainRootOffsets, s.ChainFirstOffsets);
+                    for (var i = 0; i < x; i++)
+                    {
+                        previous.Row(i, m - 1).CopyTo(s.ChainData.AsSpan(s.ChainRootOffsets[i]));
+                    }
+
+                    (data, rootOffsets, firstOffsets, baseMember) = (s.ChainData, s.ChainRootOffsets, s.ChainFirstOffsets, j - 1);
+                }
+
+                var source = new PairingTable<T>(data, rootOffsets, firstOffsets, j - 1 - baseMember);
                 var wantTable = m < n || j <= highest;
-                var row = wantTable ? (j <= highest ? new T[m] : s.FirstRows[j]) : null;
-                firstRows[j] = row!;
-                var source = new PairingTable<T>(firstRows, rootRows, j - 1);
-                Coefficients[m][_plan.Rank(m, code)] = _tables.DeriveFromTable(m, x0 + j, source, s, row is null ? [] : row.AsSpan(0, m));
+                var firstRow = wantTable ? data.AsSpan(firstOffsets![j - baseMember], m) : [];
+                Coefficients[m][_plan.Rank(m, code)] = _tables.DeriveFromTable(m, x, source, s, firstRow);
             }
 
             var slot = _plan.KeptSlot(m, _plan.Rank(m, code));
             if (slot >= 0)
             {
-                _kept[m][slot] = new PairingTable<T>(firstRows, rootRows, j);
+                _kept[m][slot] = new PairingTable<T>(data, rootOffsets, firstOffsets, j - baseMember);
             }
         }
     }

@@ -204,15 +204,13 @@ internal sealed class PairingTables<T>
         /// <summary>u(j) of the last derivation.</summary>
         public T[] Pairing { get; } = new T[n + 1];
 
-        /// <summary>Rows of a chain's first word when none of the chain is kept.</summary>
-        public T[][] RootRows { get; } = Rows(n);
+        /// <summary>A chain's rows when none of them is kept (room for a root of length up to N and N first rows).</summary>
+        public T[] ChainData { get; } = new T[2 * (n + 1) * (n + 2)];
 
-        /// <summary>New first rows of a chain's members when they are not kept.</summary>
-        public T[][] FirstRows { get; } = Rows(n);
+        /// <summary>Offsets of the root rows in <see cref="ChainData"/>.</summary>
+        public int[] ChainRootOffsets { get; } = new int[n + 2];
 
-        /// <summary>The list of a chain's first rows when none of its members is kept.</summary>
-        public T[][] FirstRowList { get; } = new T[n + 1][];
-
-        private static T[][] Rows(int n) => Enumerable.Range(0, n + 1).Select(_ => new T[n + 1]).ToArray();
+        /// <summary>Offsets of the members' first rows in <see cref="ChainData"/>.</summary>
+        public int[] ChainFirstOffsets { get; } = new int[n + 2];
     }
 }
