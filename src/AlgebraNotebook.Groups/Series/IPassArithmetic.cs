@@ -25,6 +25,9 @@ internal interface IPassArithmetic<T>
     /// <summary>The image of sum + a b.</summary>
     static abstract T MultiplyAdd(T sum, T a, T b);
 
+    /// <summary>The image of the sum of left[i] right[i] (spans of equal length).</summary>
+    static abstract T DotProduct(ReadOnlySpan<T> left, ReadOnlySpan<T> right);
+
     /// <summary>True for the image of 0 (a zero bound, or all residues zero).</summary>
     bool IsZero { get; }
 }

@@ -39,4 +39,15 @@ internal readonly struct MagnitudeBound : IPassArithmetic<MagnitudeBound>
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static MagnitudeBound MultiplyAdd(MagnitudeBound sum, MagnitudeBound a, MagnitudeBound b) => new(sum.Value + (a.Value * b.Value));
+
+    public static MagnitudeBound DotProduct(ReadOnlySpan<MagnitudeBound> left, ReadOnlySpan<MagnitudeBound> right)
+    {
+        var sum = 0.0;
+        for (var i = 0; i < left.Length; i++)
+        {
+            sum += left[i].Value * right[i].Value;
+        }
+
+        return new(sum);
+    }
 }

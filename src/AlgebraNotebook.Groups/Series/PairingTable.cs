@@ -23,6 +23,12 @@ internal readonly struct PairingTable<T>
         _member = member;
     }
 
+    /// <summary>The array holding the rows.</summary>
+    public T[] Data => _data;
+
+    /// <summary>Where row i starts in <see cref="Data"/>.</summary>
+    public int RowStart(int i) => i < _member ? _firstOffsets![_member - i] : _rootOffsets[i - _member];
+
     /// <summary>Row i of the table of a word of length m.</summary>
     public ReadOnlySpan<T> Row(int i, int m) =>
         _data.AsSpan(i < _member ? _firstOffsets![_member - i] : _rootOffsets[i - _member], m - i);

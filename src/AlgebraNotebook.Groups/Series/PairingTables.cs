@@ -120,15 +120,16 @@ internal sealed class PairingTables<T>
         var stride = s.Stride;
         var product = s.Product;
         var u = s.Pairing;
+        var column = s.Column;
         for (var j = 1; j < m; j++)
         {
-            var sum = T.Zero;
-            for (var a = 0; a < x && a <= m - 1 - j; a++)
+            var count = Math.Min(x, m - j);
+            for (var a = 0; a < count; a++)
             {
-                sum = T.MultiplyAdd(sum, _alpha[a], product[(a * stride) + j]);
+                column[a] = product[(a * stride) + j];
             }
 
-            u[j] = sum;
+            u[j] = T.DotProduct(_alpha.AsSpan(0, count), column.AsSpan(0, count));
         }
 
         return Finish(m, u, firstRow);
@@ -139,51 +140,39 @@ internal sealed class PairingTables<T>
     public T DeriveFromTable(int m, int x, PairingTable<T> source, Scratch s, Span<T> firstRow)
     {
         var u = s.Pairing;
-        u.AsSpan(0, m).Clear();
+        var column = s.Column;
+        var data = source.Data;
+        var starts = s.RowStarts;
         for (var a = 0; a < x; a++)
         {
-            var row = source.Row(a, m - 1);
-            var weight = _alpha[a];
-            for (var j = 1; j <= row.Length; j++)
+            starts[a] = source.RowStart(a);
+        }
+
+        for (var j = 1; j < m; j++)
+        {
+            // Row a of t_l' (length m - 1) holds k = 1..m - 1 - a.
+            var count = Math.Min(x, m - j);
+            for (var a = 0; a < count; a++)
             {
-                u[j] = T.MultiplyAdd(u[j], weight, row[j - 1]);
+                column[a] = data[starts[a] + j - 1];
             }
+
+            u[j] = T.DotProduct(_alpha.AsSpan(0, count), column.AsSpan(0, count));
         }
 
         return Finish(m, u, firstRow);
     }
 
-    // c_l = sum of B+_j u(j); t_l(0, k) = sum over j of RowZero[k][j] u(j). B+_j vanishes for odd j above 1, so the
-    // weights RowZero[k][j] (with B+_(j-k+1)) vanish unless j = k - 1, k, k + 1, k + 3, ...
+    // c_l = sum of B+_j u(j); t_l(0, k) = sum over j of RowZero[k][j] u(j) (j from max(1, k - 1); the weights with
+    // B+_(j-k+1) vanish for odd j - k + 1 above 1, and cost little in a dot product).
     [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     private T Finish(int m, T[] u, Span<T> firstRow)
     {
-        var c = T.Multiply(_bernoulli[1], u[1]);
-        for (var j = 2; j < m; j += 2)
+        var c = T.DotProduct(_bernoulli.AsSpan(1, m - 1), u.AsSpan(1, m - 1));
+        for (var k = 1; k <= firstRow.Length; k++)
         {
-            c = T.MultiplyAdd(c, _bernoulli[j], u[j]);
-        }
-
-        if (firstRow.IsEmpty)
-        {
-            return c;
-        }
-
-        for (var k = 1; k <= m; k++)
-        {
-            var weights = _rowZero[k];
-            var sum = k >= 2 ? T.Multiply(weights[k - 1], u[k - 1]) : T.Zero;
-            if (k < m)
-            {
-                sum = T.MultiplyAdd(sum, weights[k], u[k]);
-            }
-
-            for (var j = k + 1; j < m; j += 2)
-            {
-                sum = T.MultiplyAdd(sum, weights[j], u[j]);
-            }
-
-            firstRow[k - 1] = sum;
+            var low = Math.Max(1, k - 1);
+            firstRow[k - 1] = T.DotProduct(_rowZero[k].AsSpan(low, m - low), u.AsSpan(low, m - low));
         }
 
         return c;
@@ -203,6 +192,12 @@ internal sealed class PairingTables<T>
 
         /// <summary>u(j) of the last derivation.</summary>
         public T[] Pairing { get; } = new T[n + 1];
+
+        /// <summary>One column of a table, gathered for a dot product.</summary>
+        public T[] Column { get; } = new T[n + 1];
+
+        /// <summary>Start of each row of a table in its array.</summary>
+        public int[] RowStarts { get; } = new int[n + 2];
 
         /// <summary>A chain's rows when none of them is kept (room for a root of length up to N and N first rows).</summary>
         public T[] ChainData { get; } = new T[2 * (n + 1) * (n + 2)];
