@@ -91,6 +91,13 @@ internal static class BchDualBasisSolver
             }
         }
 
+        // The passes released their kept tables (about 10 MB at N = 20); one collection now keeps them from sitting
+        // beside the result being built (peak working set at N = 20: about 62 MB instead of 65, measured).
+        if ((first.KeptEntries + (second?.KeptEntries ?? 0)) * Unsafe.SizeOf<ResidueQuad<FirstPrimeQuad>>() > 4 << 20)
+        {
+            GC.Collect();
+        }
+
         var crt = new Garner(primes);
         // 128-bit reconstruction when |D_n c_l| < 2^127 is proved (bitsNeeded counts the sign bit).
         var narrow = bitsNeeded <= 127;

@@ -21,6 +21,7 @@ internal sealed class DualBasisPass<T>
     private readonly BchDualBasisPlan _plan;
     private readonly PairingTables<T> _tables;
     private readonly PairingTable<T>[][] _kept;
+    private long _keptEntries;
 
     public DualBasisPass(BchDualBasisPlan plan)
     {
@@ -38,6 +39,9 @@ internal sealed class DualBasisPass<T>
 
     /// <summary>c_l by length, then by rank of l among the Lyndon words of that length.</summary>
     public T[][] Coefficients { get; }
+
+    /// <summary>Entries of the kept tables the pass allocated (released when it ends).</summary>
+    public long KeptEntries => Interlocked.Read(ref _keptEntries);
 
     /// <summary>Runs the pass on up to <paramref name="parallelism"/> threads.</summary>
     public void Run(int parallelism)
@@ -100,6 +104,7 @@ internal sealed class DualBasisPass<T>
             rootOffsets = new int[x0 + 1];
             firstOffsets = highest >= 1 ? new int[highest + 1] : null;
             data = new T[PairingTable<T>.Layout(n0, x0, highest, rootOffsets, firstOffsets)];
+            Interlocked.Add(ref _keptEntries, data.Length);
         }
         else
         {
