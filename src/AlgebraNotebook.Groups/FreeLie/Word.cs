@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using System.Text;
 using AlgebraNotebook.Exact;
 
@@ -31,6 +32,7 @@ public readonly struct Word : IEquatable<Word>, IComparable<Word>
 
     /// <summary>Creates a word from zero-based letter indices.</summary>
     /// <exception cref="ExactArgumentException">A letter is outside 0..15 or there are more than 32 letters.</exception>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
     public Word(ReadOnlySpan<int> letters)
     {
         if (letters.Length > MaxLength)

@@ -137,7 +137,11 @@ internal static class BchDualBasisSolver
         var scaleResidues = scales.Select(d => d.IsZero ? [] : primes.Select(q => (ulong)(d % q)).ToArray()).ToArray();
         var result = new (LyndonWord Word, Rational Coefficient)[total];
         var options = new ParallelOptions { MaxDegreeOfParallelism = Math.Max(1, parallelism) };
-        Parallel.For(0, chunks.Count, options, c =>
+        Parallel.For(0, chunks.Count, options, Fill);
+        return result;
+
+        [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+        void Fill(int c)
         {
             var (n, start, end, at) = chunks[c];
             var words = plan.Words(n);
@@ -163,7 +167,7 @@ internal static class BchDualBasisSolver
                 // The residues of c_l times those of D_n are the residues of the integer D_n c_l.
                 for (var lane = 0; lane < residues.Length; lane++)
                 {
-                    residues[lane] = (ulong)((UInt128)residues[lane] * scaleResidues[n][lane] % primes[lane]);
+                    residues[lane] = residues[lane] * scaleResidues[n][lane] % primes[lane];
                 }
 
                 Rational coefficient;
@@ -180,9 +184,7 @@ internal static class BchDualBasisSolver
 
                 result[at++] = (word(n, words[r]), coefficient);
             }
-        });
-
-        return result;
+        }
 
         bool IsZero(int n, int r) => first[n][r].IsZero && (second is null || second[n][r].IsZero);
     }
