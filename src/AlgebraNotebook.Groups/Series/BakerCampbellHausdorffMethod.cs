@@ -33,8 +33,9 @@ public enum BakerCampbellHausdorffMethod
     /// The default. Each Lyndon coordinate is a pairing with the dual basis of the Poincare-Birkhoff-Witt basis
     /// (Reutenauer, Free Lie Algebras, Thm 5.3), computed by recurrences on Lyndon factorisations with no triangular
     /// system (derivation in the source), modulo four primes near 2^26 (eight when needed), plus a pass that bounds
-    /// every coordinate so that the Chinese remainder theorem gives the exact rationals. Measured on the idle machine
-    /// of the benchmark results. Capped by <see cref="SeriesLimits.MaxWordCoefficientDegree"/>.
+    /// every coordinate so that the Chinese remainder theorem gives the exact rationals. Measured on the idle 2-core
+    /// machine at N = 20: 0.21 s warm, 0.42 s in a fresh process, 61 MB peak working set; N = 24 in 7.7 s. Capped by
+    /// <see cref="SeriesLimits.MaxWordCoefficientDegree"/>.
     /// </summary>
     DualBasis,
 }

@@ -40,10 +40,12 @@ namespace AlgebraNotebook.Groups.Series;
 /// integer D_n c_l, proved unique because twice the bound on |D_n c_l| is below the product of the primes.
 /// </para>
 /// <para>
-/// Cost: per Lyndon word, one product of the factor tables of l' (a table of length m has about m x / 2 entries for
-/// x letters X) and O(n^2) for the Bernoulli row; at N = 20 about 3.5e7 products (counted). Memory: the
-/// tables of words used as factors (about 7.6e5 entries at N = 20), the Lyndon bit sets (2^N bits) and the
-/// coefficients. The first letter Y variant follows from log(e^Y e^X) = -log(e^-X e^-Y): c_l changes by (-1)^(n+1).
+/// Cost: per root word one product of the factor tables of its l' (a table of length m has about m x / 2 entries for
+/// x letters X), per word O(n^2) for the derivation step; at N = 20 about 3.5e7 table products (counted). Memory: the
+/// kept tables (about 10 MB at N = 20, released after the pass, followed by one collection so that they do not sit
+/// beside the result), the Lyndon bit sets (2^N bits), the residues and the result. Measured at N = 20 on the idle
+/// 2-core machine: 0.21 s warm, 0.42 s median in a fresh process, 61 MB peak working set (results/groups.md). The
+/// first letter Y variant follows from log(e^Y e^X) = -log(e^-X e^-Y): c_l changes by (-1)^(n+1).
 /// </para>
 /// </remarks>
 internal static class BchDualBasisSolver
