@@ -58,35 +58,21 @@ public static class BakerCampbellHausdorff
         switch (method)
         {
             case BakerCampbellHausdorffMethod.WordCoefficients when x != y:
+            case BakerCampbellHausdorffMethod.WordCoefficientRows when x != y:
+            case BakerCampbellHausdorffMethod.DualBasis when x != y:
                 (limits ?? SeriesLimits.Default).CheckWordCoefficientDegree(what, degree);
                 var ix = algebra.Alphabet.IndexOf(x);
                 var iy = algebra.Alphabet.IndexOf(y);
-                var terms = BchLyndonSolver.TrySolve(degree, Math.Min(ix, iy), Math.Max(ix, iy), firstIsSmall: ix < iy);
+                var (small, large, firstIsSmall) = (Math.Min(ix, iy), Math.Max(ix, iy), ix < iy);
+                var terms = method switch
+                {
+                    BakerCampbellHausdorffMethod.WordCoefficients => BchLyndonSolver.TrySolve(degree, small, large, firstIsSmall)?.ToArray(),
+                    BakerCampbellHausdorffMethod.WordCoefficientRows => BchLyndonRowSolver.TrySolve(degree, small, large, firstIsSmall)?.ToArray(),
+                    _ => BchDualBasisSolver.TrySolve(degree, small, large, firstIsSmall),
+                };
                 if (terms is not null)
                 {
-                    return LieSeries.FromSortedTerms(algebra, terms.ToArray(), degree + 1);
-                }
-
-                break;
-            case BakerCampbellHausdorffMethod.WordCoefficientRows when x != y:
-                (limits ?? SeriesLimits.Default).CheckWordCoefficientDegree(what, degree);
-                var ir = algebra.Alphabet.IndexOf(x);
-                var jr = algebra.Alphabet.IndexOf(y);
-                var rowTerms = BchLyndonRowSolver.TrySolve(degree, Math.Min(ir, jr), Math.Max(ir, jr), firstIsSmall: ir < jr);
-                if (rowTerms is not null)
-                {
-                    return LieSeries.FromSortedTerms(algebra, rowTerms.ToArray(), degree + 1);
-                }
-
-                break;
-            case BakerCampbellHausdorffMethod.DualBasis when x != y:
-                (limits ?? SeriesLimits.Default).CheckWordCoefficientDegree(what, degree);
-                var id = algebra.Alphabet.IndexOf(x);
-                var jd = algebra.Alphabet.IndexOf(y);
-                var dualTerms = BchDualBasisSolver.TrySolve(degree, Math.Min(id, jd), Math.Max(id, jd), firstIsSmall: id < jd);
-                if (dualTerms is not null)
-                {
-                    return LieSeries.FromSortedTerms(algebra, dualTerms, degree + 1);
+                    return LieSeries.FromSortedTerms(algebra, terms, degree + 1);
                 }
 
                 break;

@@ -135,6 +135,33 @@ internal sealed class BchDualBasisPlan
         return count;
     }
 
+    /// <summary>
+    /// The Lyndon factorisation of a word as runs of equal factors (length, code, repetition), in order; returns the
+    /// number of runs. <paramref name="starts"/> needs room for length + 1 entries.
+    /// </summary>
+    [MethodImpl(MethodImplOptions.AggressiveOptimization)]
+    public static int FactorRuns(int code, int length, Span<int> starts, Span<(int Length, int Code, int Power)> runs)
+    {
+        var count = LyndonFactorisation(code, length, starts);
+        var runCount = 0;
+        for (var f = 0; f < count;)
+        {
+            var factorLength = starts[f + 1] - starts[f];
+            var factorCode = Factor(code, length, starts, f);
+            var power = 1;
+            while (f + power < count && starts[f + power + 1] - starts[f + power] == factorLength &&
+                   Factor(code, length, starts, f + power) == factorCode)
+            {
+                power++;
+            }
+
+            runs[runCount++] = (factorLength, factorCode, power);
+            f += power;
+        }
+
+        return runCount;
+    }
+
     /// <summary>The code of factor f of a word whose factor boundaries are <paramref name="starts"/>.</summary>
     public static int Factor(int code, int length, ReadOnlySpan<int> starts, int f) =>
         (code >> (length - starts[f + 1])) & ((1 << (starts[f + 1] - starts[f])) - 1);

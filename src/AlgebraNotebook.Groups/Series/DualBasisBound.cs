@@ -79,26 +79,7 @@ internal static class DualBasisBound
             var columns = 0;
             foreach (var (length, factorX, power) in pattern)
             {
-                var factor = bound[length][factorX]!.Value;
-                for (var e = 0; e < power; e++)
-                {
-                    if (columns == 0)
-                    {
-                        PairingTables<MagnitudeBound>.Load(factor, length, factorX, s);
-                    }
-                    else
-                    {
-                        tables.Multiply(rows, columns, factor, length, factorX, s);
-                    }
-
-                    rows += factorX;
-                    columns += length;
-                }
-
-                if (power > 1)
-                {
-                    tables.DivideByFactorial(rows, columns, power, s);
-                }
+                tables.Shuffle(ref rows, ref columns, bound[length][factorX]!.Value, length, factorX, power, s);
             }
 
             var c = tables.DeriveFromProduct(m, x, s, first);
@@ -133,6 +114,7 @@ internal static class DualBasisBound
         var n = plan.Degree;
         var patterns = new List<(int, int, int)[]>?[n + 1][];
         Span<int> starts = stackalloc int[n + 1];
+        Span<(int Length, int Code, int Power)> runs = stackalloc (int, int, int)[n];
         Span<char> key = stackalloc char[(3 * n) + 1];
         for (var m = 1; m <= n; m++)
         {
@@ -140,27 +122,15 @@ internal static class DualBasisBound
             var seen = new HashSet<string>().GetAlternateLookup<ReadOnlySpan<char>>();
             foreach (var code in m >= 3 ? plan.Roots(m) : [])
             {
-                var length = m - 1;
-                var rest = code & ((1 << length) - 1);
-                var count = BchDualBasisPlan.LyndonFactorisation(rest, length, starts);
+                var count = BchDualBasisPlan.FactorRuns(code & ((1 << (m - 1)) - 1), m - 1, starts, runs);
                 var x = m - BitOperations.PopCount((uint)code);
                 key[0] = (char)x;
                 var size = 1;
-                for (var f = 0; f < count;)
+                foreach (var (factorLength, factor, power) in runs[..count])
                 {
-                    var factor = BchDualBasisPlan.Factor(rest, length, starts, f);
-                    var factorLength = starts[f + 1] - starts[f];
-                    var power = 1;
-                    while (f + power < count && starts[f + power + 1] - starts[f + power] == factorLength &&
-                           BchDualBasisPlan.Factor(rest, length, starts, f + power) == factor)
-                    {
-                        power++;
-                    }
-
                     key[size++] = (char)factorLength;
                     key[size++] = (char)(factorLength - BitOperations.PopCount((uint)factor));
                     key[size++] = (char)power;
-                    f += power;
                 }
 
                 if (seen.Add(key[..size]))

@@ -167,44 +167,14 @@ internal sealed class DualBasisPass<T>
     private int ProductOfFactors(int code, int length, PairingTables<T>.Scratch s)
     {
         Span<int> starts = stackalloc int[length + 1];
-        var count = BchDualBasisPlan.LyndonFactorisation(code, length, starts);
+        Span<(int Length, int Code, int Power)> runs = stackalloc (int, int, int)[length];
+        var count = BchDualBasisPlan.FactorRuns(code, length, starts, runs);
         var rows = 0;
         var columns = 0;
-        var factor = 0;
-        while (factor < count)
+        foreach (var (factorLength, factorCode, power) in runs[..count])
         {
-            var factorLength = starts[factor + 1] - starts[factor];
-            var factorCode = BchDualBasisPlan.Factor(code, length, starts, factor);
-            var power = 1;
-            while (factor + power < count && BchDualBasisPlan.Factor(code, length, starts, factor + power) == factorCode &&
-                   starts[factor + power + 1] - starts[factor + power] == factorLength)
-            {
-                power++;
-            }
-
-            var factorX = factorLength - BitOperations.PopCount((uint)factorCode);
             var table = _kept[factorLength][_plan.KeptSlot(factorLength, _plan.Rank(factorLength, factorCode))];
-            for (var e = 0; e < power; e++)
-            {
-                if (columns == 0)
-                {
-                    PairingTables<T>.Load(table, factorLength, factorX, s);
-                }
-                else
-                {
-                    _tables.Multiply(rows, columns, table, factorLength, factorX, s);
-                }
-
-                rows += factorX;
-                columns += factorLength;
-            }
-
-            if (power > 1)
-            {
-                _tables.DivideByFactorial(rows, columns, power, s);
-            }
-
-            factor += power;
+            _tables.Shuffle(ref rows, ref columns, table, factorLength, factorLength - BitOperations.PopCount((uint)factorCode), power, s);
         }
 
         return rows;

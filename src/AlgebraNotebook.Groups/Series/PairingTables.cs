@@ -95,6 +95,34 @@ internal sealed class PairingTables<T>
         (s.Product, s.Spare) = (s.Spare, s.Product);
     }
 
+    /// <summary>
+    /// The product := its shuffle with table^power / power! (the table of a word of length m with x letters X repeated
+    /// power times in a Lyndon factorisation); the first factor of a product is loaded, not multiplied. Rows and columns
+    /// track the product's extent (both 0 before the first factor).
+    /// </summary>
+    public void Shuffle(ref int rows, ref int columns, PairingTable<T> table, int m, int x, int power, Scratch s)
+    {
+        for (var e = 0; e < power; e++)
+        {
+            if (columns == 0)
+            {
+                Load(table, m, x, s);
+            }
+            else
+            {
+                Multiply(rows, columns, table, m, x, s);
+            }
+
+            rows += x;
+            columns += m;
+        }
+
+        if (power > 1)
+        {
+            DivideByFactorial(rows, columns, power, s);
+        }
+    }
+
     /// <summary>The product (rows 0..rows, columns 0..columns) := itself / e!.</summary>
     public void DivideByFactorial(int rows, int columns, int e, Scratch s)
     {
