@@ -1,4 +1,5 @@
 using AlgebraNotebook.Algebras.Chevalley;
+using AlgebraNotebook.Algebras.Tests.Chevalley;
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Roots;
@@ -9,12 +10,6 @@ namespace AlgebraNotebook.Algebras.Tests;
 
 public class ComplexifiedTypeTests(ITestOutputHelper output)
 {
-    private static LieAlgebra<Rational> Chevalley(string type)
-    {
-        var chevalley = ChevalleyBasis.Of(type);
-        return chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension);
-    }
-
     [Theory]
     // Dimensions and numbers of positive roots: Bourbaki, Lie Groups and Lie Algebras, ch. VI, Plates I-IX.
     [InlineData("A1", 3, 1)]
@@ -40,7 +35,7 @@ public class ComplexifiedTypeTests(ITestOutputHelper output)
     [InlineData("E6", 78, 36)]
     public void Dense_random_basis_is_identified(string type, int dimension, int positiveRoots)
     {
-        var algebra = DenseBasisChange.Disguise(Chevalley(type), seed: 11);
+        var algebra = DenseBasisChange.Disguise(RandomBasisChange.Chevalley(type), seed: 11);
         var result = algebra.TypeOfComplexification();
         output.WriteLine(result.ToString());
         Assert.Equal(CartanType.Parse(type), result.Type);
@@ -86,7 +81,7 @@ public class ComplexifiedTypeTests(ITestOutputHelper output)
     public void Direct_sum_in_a_dense_basis_gives_both_components()
     {
         // sl(2) + sl(3) has type A1+A2 (common practice: the root system of a direct sum is the union).
-        var sum = LieAlgebras.DirectSum(Chevalley("A1"), Chevalley("A2"));
+        var sum = LieAlgebras.DirectSum(RandomBasisChange.Chevalley("A1"), RandomBasisChange.Chevalley("A2"));
         var result = DenseBasisChange.Disguise(sum, seed: 5).TypeOfComplexification();
         output.WriteLine(result.ToString());
         Assert.Equal(["A1", "A2"], result.Type.Components.Select(c => c.ToString()).Order());
@@ -116,7 +111,7 @@ public class ComplexifiedTypeTests(ITestOutputHelper output)
     [InlineData("B2", 3)]
     public void Summary_of_a_dense_basis_names_the_type_and_says_what_it_rests_on(string type, int seed)
     {
-        var algebra = DenseBasisChange.Disguise(Chevalley(type), seed);
+        var algebra = DenseBasisChange.Disguise(RandomBasisChange.Chevalley(type), seed);
         var summary = algebra.Summary();
         foreach (var note in summary.Notes)
         {
@@ -135,7 +130,7 @@ public class ComplexifiedTypeTests(ITestOutputHelper output)
         // The Chevalley basis spans the split real form: for B2 that is so(3,2) = sp(4,R), maximal compact subalgebra
         // so(3) + so(2) of dimension 4 (Helgason, ch. X, Table V, from memory), so the Killing signature is (6, 4, 0).
         // Degrees of the basic invariants of W(B2): 2, 4 (Humphreys, Reflection Groups and Coxeter Groups, 3.7 Table 1).
-        var algebra = DenseBasisChange.Disguise(Chevalley("B2"), seed: 3);
+        var algebra = DenseBasisChange.Disguise(RandomBasisChange.Chevalley("B2"), seed: 3);
         var split = algebra.Complexify().RootDecomposition().IsSplit;
         var realForm = algebra.IdentifyRealForm();
         var degrees = AlgebraNotebook.Algebras.Enveloping.CasimirElements.BasicInvariantDegrees(algebra);

@@ -1,4 +1,5 @@
 using AlgebraNotebook.Algebras.Chevalley;
+using AlgebraNotebook.Algebras.Tests.Chevalley;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Roots;
@@ -15,12 +16,6 @@ namespace AlgebraNotebook.Algebras.Tests;
 /// </summary>
 public class SplitCertificateTests(ITestOutputHelper output)
 {
-    private static LieAlgebra<Rational> Chevalley(string type)
-    {
-        var chevalley = ChevalleyBasis.Of(type);
-        return chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension);
-    }
-
     [Fact]
     public void Square_root_of_two_is_outside_both_fields()
     {
@@ -105,7 +100,7 @@ public class SplitCertificateTests(ITestOutputHelper output)
         // (Humphreys, Introduction to Lie Algebras, §25.2, from memory), so no element of it may be refused.
         foreach (var type in new[] { "A2", "B2", "G2" })
         {
-            var algebra = Chevalley(type);
+            var algebra = RandomBasisChange.Chevalley(type);
             var roots = algebra.RootDecomposition();
             Assert.True(roots.IsSplit, roots.Note);
             var h = roots.CartanSubalgebra.Aggregate((a, b) => a + b);
@@ -121,7 +116,7 @@ public class SplitCertificateTests(ITestOutputHelper output)
         // The dispatcher's "not split" without exact eigenvalues must agree with the exact reference variant (the test
         // oracle) on the same Cartan subalgebra. The type itself is Bourbaki's (Plates II, IX); it is checked in the
         // Describe tests.
-        var complex = DenseBasisChange.Disguise(Chevalley(type), seed).Complexify();
+        var complex = DenseBasisChange.Disguise(RandomBasisChange.Chevalley(type), seed).Complexify();
         var fast = complex.RootDecomposition();
         output.WriteLine(fast.Note);
         Assert.False(fast.IsSplit);

@@ -11,11 +11,14 @@ namespace AlgebraNotebook.Algebras.Tests.Chevalley;
 /// </summary>
 internal static class RandomBasisChange
 {
-    public static LieAlgebra<Rational> Disguised(string type, int seed)
+    public static LieAlgebra<Rational> Disguised(string type, int seed) =>
+        Disguise(Chevalley(type), ChevalleyBasis.Of(type).System.Rank, seed);
+
+    /// <summary>The algebra of the given Cartan type in its Chevalley basis (structure constants over Q).</summary>
+    public static LieAlgebra<Rational> Chevalley(string type)
     {
         var chevalley = ChevalleyBasis.Of(type);
-        var algebra = chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension);
-        return Disguise(algebra, chevalley.System.Rank, seed);
+        return chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension);
     }
 
     public static LieAlgebra<Rational> Disguise(LieAlgebra<Rational> algebra, int rank, int seed) =>

@@ -2,6 +2,7 @@ using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Algebras.Chevalley;
 using AlgebraNotebook.Algebras.Tests;
 using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.Algebras.Tests.Chevalley;
 using BenchmarkDotNet.Attributes;
 
 namespace AlgebraNotebook.Benchmarks.Algebras;
@@ -45,8 +46,7 @@ public class ComplexifiedTypeBenchmarks
     /// </summary>
     public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) DenseRandomBasis(string type, int seed)
     {
-        var chevalley = ChevalleyBasis.Of(type);
-        return DenseRandomBasis(chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension), seed);
+        return DenseRandomBasis(RandomBasisChange.Chevalley(type), seed);
     }
 
     /// <summary>The same dense unimodular basis for any algebra: the Algebras tests' DenseBasisChange, linked into this project.</summary>

@@ -15,8 +15,7 @@ public static class RandomBasis
     /// <summary>The undisguised algebra and the new basis, so a benchmark can rebuild a fresh algebra per iteration.</summary>
     public static (LieAlgebra<Rational> Algebra, List<LieElement<Rational>> Basis) Prepare(string type, int seed)
     {
-        var chevalley = ChevalleyBasis.Of(type);
-        var algebra = chevalley.ToLieAlgebra(maximumDimension: chevalley.Dimension);
-        return (algebra, RandomBasisChange.Basis(algebra, chevalley.System.Rank, seed));
+        var algebra = RandomBasisChange.Chevalley(type);
+        return (algebra, RandomBasisChange.Basis(algebra, ChevalleyBasis.Of(type).System.Rank, seed));
     }
 }
