@@ -1,6 +1,7 @@
 using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Algebras.Tests;
 
@@ -84,8 +85,7 @@ public class KillingFormTests
         Assert.Contains("[E, F]", error.Message);
     }
 
-    internal static int Iterations =>
-        int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var m) && m > 0 ? m : 1;
+    internal static int Iterations => TestIterations.Multiplier;
 
     internal static LieElement<Rational> RandomElement(LieAlgebra<Rational> g, Random random) =>
         g.Element(Enumerable.Range(0, g.Dimension).Select(_ => new Rational(random.Next(-5, 6), random.Next(1, 4))).ToArray());

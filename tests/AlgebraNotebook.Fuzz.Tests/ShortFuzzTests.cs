@@ -1,4 +1,5 @@
 using Xunit.Abstractions;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Fuzz.Tests;
 
@@ -25,8 +26,7 @@ public class ShortFuzzTests(ITestOutputHelper output)
     [MemberData(nameof(Targets))]
     public void Fuzzed_inputs_are_accepted_or_refused_with_a_documented_exception_and_never_crash_or_hang(string name)
     {
-        var multiplier = int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var m) && m > 0 ? m : 1;
-        var report = FuzzRunner.Run(FuzzTargets.Named(name), Seed, 0, 1_500L * multiplier);
+        var report = FuzzRunner.Run(FuzzTargets.Named(name), Seed, 0, 1_500L * TestIterations.Multiplier);
         output.WriteLine(report.ToString());
         foreach (var failure in report.Failures)
         {

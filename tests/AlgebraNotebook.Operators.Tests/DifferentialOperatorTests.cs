@@ -1,6 +1,7 @@
 using AlgebraNotebook.Exact;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Operators;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Operators.Tests;
 
@@ -32,7 +33,7 @@ public class DifferentialOperatorTests
     [Fact]
     public void Products_are_associative_and_distribute_over_sums_on_random_operators()
     {
-        var iterations = int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var m) ? Math.Max(1, m) : 1;
+        var iterations = TestIterations.Multiplier;
         var random = new Random(20261201);
         string[] atoms = ["x", "y", "z", "hbar", "d_x", "d_y", "d_z", "i", "2", "x^2"];
         string RandomText() => string.Join(" + ", Enumerable.Range(0, 3).Select(_ => $"{atoms[random.Next(atoms.Length)]}*{atoms[random.Next(atoms.Length)]}"));

@@ -43,6 +43,39 @@ internal static class CoefficientSupport<T>
     }
 
     /// <summary>
+    /// Size of the largest coefficient of <paramref name="coefficients"/> in bits, numerators and denominators of every
+    /// rational component together (so 1 counts 2 bits over Q and 3 over Q(i)); at least 2. For a coefficient type
+    /// without rational components (<see cref="RationalParts"/> null) the answer is 2: its size is taken not to grow.
+    /// </summary>
+    public static long LargestBits(IEnumerable<T> coefficients)
+    {
+        long largest = 2;
+        foreach (var coefficient in coefficients)
+        {
+            var parts = RationalParts(coefficient);
+            if (parts is null)
+            {
+                return largest;
+            }
+
+            long bits = 0;
+            foreach (var part in parts)
+            {
+                // Magnitudes: GetBitLength of a negative number counts two's-complement bits, 0 for -1, so -1/2 would
+                // have looked like 1 and (-1/2)^2147483647 would have been admitted as free.
+                bits += BigInteger.Abs(part.Numerator).GetBitLength() + part.Denominator.GetBitLength();
+            }
+
+            largest = Math.Max(largest, bits);
+        }
+
+        return largest;
+    }
+
+    /// <summary>Bits of the coefficient 1 as <see cref="LargestBits"/> counts them.</summary>
+    public static long OneBits { get; } = LargestBits([T.One]);
+
+    /// <summary>
     /// Splits a coefficient for printing in a sum: <c>Negative</c> says whether to print a minus sign in front of
     /// <c>Magnitude</c>; <c>IsUnit</c> says the magnitude is 1 (and may be left out before a monomial).
     /// Coefficients that are themselves sums (1 - 2*i) come back parenthesised and non-negative.

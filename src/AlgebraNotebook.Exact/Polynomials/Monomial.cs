@@ -6,8 +6,9 @@ namespace AlgebraNotebook.Exact.Polynomials;
 /// <summary>
 /// A power product x1^e1 ... xk^ek of symbols with positive exponents; immutable and canonical
 /// (factors sorted by <see cref="Symbol.Compare"/>, i.e. by name, no zero exponents). The empty product is <see cref="One"/>.
-/// Every exponent and the total degree fit in an <see cref="int"/>: building a monomial whose exponents or total degree
-/// would exceed <see cref="int.MaxValue"/> throws <see cref="OverflowException"/> (the parsers report it as a parse error).
+/// Every exponent and the total degree fit in an <see cref="int"/>, never wrapped around: a product whose exponents or
+/// total degree would exceed <see cref="int.MaxValue"/> throws <see cref="OverflowException"/> (the parsers report it as
+/// a parse error); <see cref="FromFactors"/> and <see cref="Pow"/> refuse such input with named exceptions.
 /// </summary>
 public sealed class Monomial : IEquatable<Monomial>
 {
@@ -77,7 +78,8 @@ public sealed class Monomial : IEquatable<Monomial>
     }
 
     /// <summary>Builds a monomial from factors in any order; repeated symbols add their exponents, zero exponents vanish.</summary>
-    /// <exception cref="ExactArgumentException">An exponent is negative.</exception>
+    /// <exception cref="ExactArgumentException">An exponent is negative, or an exponent or the total degree would exceed
+    /// <see cref="int.MaxValue"/>.</exception>
     public static Monomial FromFactors(IEnumerable<(Symbol Symbol, int Exponent)> factors)
     {
         ArgumentNullException.ThrowIfNull(factors);
@@ -89,10 +91,24 @@ public sealed class Monomial : IEquatable<Monomial>
                 throw new ExactArgumentException($"Exponent {exponent} of {symbol} is negative; monomials have non-negative exponents.", nameof(factors));
             }
 
-            collected[symbol] = collected.TryGetValue(symbol, out var old) ? (symbol, old.Exponent + exponent) : (symbol, exponent);
+            var sum = collected.TryGetValue(symbol, out var old) ? (long)old.Exponent + exponent : exponent;
+            if (sum > int.MaxValue)
+            {
+                throw new ExactArgumentException(
+                    $"The exponents of {symbol} add up to {sum}, more than the largest exponent a monomial holds ({int.MaxValue}).", nameof(factors));
+            }
+
+            collected[symbol] = (symbol, (int)sum);
         }
 
         var kept = collected.Values.Where(f => f.Exponent != 0).ToArray();
+        var total = kept.Sum(f => (long)f.Exponent);
+        if (total > int.MaxValue)
+        {
+            throw new ExactArgumentException(
+                $"The factors {string.Join(", ", kept.Select(f => $"{f.Symbol}^{f.Exponent}"))} have total degree {total}, more than a monomial holds ({int.MaxValue}).", nameof(factors));
+        }
+
         return kept.Length == 0 ? One : new Monomial(kept.Select(f => f.Symbol).ToArray(), kept.Select(f => f.Exponent).ToArray());
     }
 
@@ -201,6 +217,8 @@ public sealed class Monomial : IEquatable<Monomial>
     }
 
     /// <summary>This monomial to a non-negative power.</summary>
+    /// <exception cref="ExactArgumentException">The exponent is negative.</exception>
+    /// <exception cref="BeyondCapabilityException">The total degree of the result would exceed <see cref="int.MaxValue"/>.</exception>
     public Monomial Pow(int exponent)
     {
         if (exponent < 0)
@@ -213,7 +231,15 @@ public sealed class Monomial : IEquatable<Monomial>
             return One;
         }
 
-        return new Monomial((Symbol[])_symbols.Clone(), _exponents.Select(e => checked(e * exponent)).ToArray());
+        var degree = (long)TotalDegree * exponent;
+        if (degree > int.MaxValue)
+        {
+            throw new BeyondCapabilityException(
+                $"({this})^{exponent} would have total degree {degree}, beyond the largest exponent and total degree a monomial holds ({int.MaxValue}).");
+        }
+
+        // Each exponent is at most the total degree, so no product below overflows.
+        return new Monomial((Symbol[])_symbols.Clone(), _exponents.Select(e => e * exponent).ToArray());
     }
 
     /// <summary>The monomial with <paramref name="symbol"/> removed.</summary>

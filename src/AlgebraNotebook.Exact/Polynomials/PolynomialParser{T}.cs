@@ -39,7 +39,7 @@ internal sealed class PolynomialParser<T>
     private const long MaxPowerBits = 1 << 16;
 
     /// <summary>Bits of the coefficient 1 as <see cref="Bits"/> counts them.</summary>
-    private static readonly long OneBits = Bits(Polynomial<T>.One);
+    private static readonly long OneBits = CoefficientSupport<T>.OneBits;
 
     private readonly string _text;
     private int _position;
@@ -237,6 +237,12 @@ internal sealed class PolynomialParser<T>
 
         _position = after;
         ChargePower(primary, exponent);
+        if (primary.TermCount == 1 && (long)primary.TotalDegree * exponent > int.MaxValue)
+        {
+            // Pow refuses this too (BeyondCapabilityException); in text it is a parse error at the exponent.
+            throw new ExactParseException(_text, after, $"the power ^{exponent} makes an exponent or a total degree larger than {int.MaxValue}");
+        }
+
         try
         {
             return primary.Pow(exponent);
@@ -329,30 +335,7 @@ internal sealed class PolynomialParser<T>
     }
 
     /// <summary>The largest coefficient of the polynomial in bits (numerator plus denominator, all rational parts).</summary>
-    private static long Bits(Polynomial<T> polynomial)
-    {
-        long largest = 2;
-        foreach (var (_, coefficient) in polynomial.Terms)
-        {
-            var parts = CoefficientSupport<T>.RationalParts(coefficient);
-            if (parts is null)
-            {
-                return largest;
-            }
-
-            long bits = 0;
-            foreach (var part in parts)
-            {
-                // Magnitudes: GetBitLength of a negative number counts two's-complement bits, 0 for -1, so -1/2 would
-                // have looked like 1 and (-1/2)^2147483647 would have been admitted as free.
-                bits += System.Numerics.BigInteger.Abs(part.Numerator).GetBitLength() + part.Denominator.GetBitLength();
-            }
-
-            largest = Math.Max(largest, bits);
-        }
-
-        return largest;
-    }
+    private static long Bits(Polynomial<T> polynomial) => CoefficientSupport<T>.LargestBits(polynomial.Terms.Select(t => t.Coefficient));
 
     private int ParseExponent()
     {

@@ -118,18 +118,24 @@ public sealed partial class Polynomial<T>
     /// work when the result is estimated to exceed <see cref="PowerLimits.Default"/>.
     /// </summary>
     /// <exception cref="ExactArgumentException">The exponent is negative.</exception>
-    /// <exception cref="BeyondCapabilityException">The estimated result exceeds the default limits.</exception>
+    /// <exception cref="BeyondCapabilityException">The estimated result exceeds the default limits, or an exponent or
+    /// the total degree of the result would exceed <see cref="int.MaxValue"/>.</exception>
     public Polynomial<T> Pow(int exponent) => Pow(exponent, PowerLimits.Default);
 
     /// <summary>
     /// The polynomial to a non-negative integer power, refused before any work when the result's estimated size exceeds
-    /// <paramref name="limits"/>: the number of terms is at most the number of multisets of size <paramref name="exponent"/>
-    /// drawn from the polynomial's terms, and at most the number of monomials of the result's total degree or less.
-    /// A single term is always raised directly (its cost is one scalar power), and p^1 is p itself, whatever its size.
+    /// <paramref name="limits"/>. For several terms: the number of terms is at most the number of multisets of size
+    /// <paramref name="exponent"/> drawn from the polynomial's terms, and at most the number of monomials of the result's
+    /// total degree or less; the largest coefficient is estimated at <paramref name="exponent"/> x (b - b1 + log2 k) bits,
+    /// b the bits of the largest coefficient (numerator and denominator together), b1 those of the coefficient 1 and
+    /// k the number of terms. A single term is raised directly (one scalar power) without the degree and term limits,
+    /// but its coefficient estimate <paramref name="exponent"/> x (b - b1) bits is held to
+    /// <see cref="PowerLimits.MaxCoefficientBits"/>; p^1 is p itself, whatever its size.
     /// </summary>
     /// <exception cref="ExactArgumentException">The exponent is negative, or <paramref name="limits"/> is invalid.</exception>
-    /// <exception cref="BeyondCapabilityException">The estimated result exceeds <paramref name="limits"/>; the message gives the estimate.</exception>
-    /// <exception cref="OverflowException">An exponent or the total degree of the result would exceed <see cref="int.MaxValue"/>.</exception>
+    /// <exception cref="BeyondCapabilityException">The estimated result exceeds <paramref name="limits"/>, or an exponent
+    /// or the total degree of the result would exceed <see cref="int.MaxValue"/> (whatever the limits); the message
+    /// gives the estimate.</exception>
     public Polynomial<T> Pow(int exponent, PowerLimits limits)
     {
         ArgumentNullException.ThrowIfNull(limits);
@@ -140,19 +146,20 @@ public sealed partial class Polynomial<T>
                 $"Exponent {exponent} is negative; polynomials have only non-negative integer powers (polynomial {this}).", nameof(exponent));
         }
 
-        if (exponent == 1)
+        if (exponent == 0)
+        {
+            return OneInstance;
+        }
+
+        if (exponent == 1 || IsZero)
         {
             return this;
         }
 
+        CheckPowerEstimate(exponent, limits);
         if (_monomials.Length == 1)
         {
             return new Polynomial<T>([_monomials[0].Pow(exponent)], [PowScalar(_coefficients[0], exponent)]);
-        }
-
-        if (_monomials.Length > 1)
-        {
-            CheckPowerEstimate(exponent, limits);
         }
 
         return Powers.BySquaring(OneInstance, this, exponent);
@@ -161,22 +168,49 @@ public sealed partial class Polynomial<T>
     private void CheckPowerEstimate(int exponent, PowerLimits limits)
     {
         var degree = (long)TotalDegree * exponent;
-        // Terms of p^e: multisets of e terms of p, C(k - 1 + e, e), and monomials in n variables of degree <= d e, C(n + d e, n).
-        var byTerms = Binomial(_monomials.Length - 1 + (long)exponent, _monomials.Length - 1);
-        var byMonomials = Binomial(Symbols.Count + degree, Symbols.Count);
-        var terms = BigInteger.Min(byTerms, byMonomials);
-        if (degree > limits.MaxTotalDegree || terms > limits.MaxTerms)
+        var single = _monomials.Length == 1;
+        if (!single)
         {
-            var shown = ToString();
-            if (shown.Length > 60)
+            // Terms of p^e: multisets of e terms of p, C(k - 1 + e, e), and monomials in n variables of degree <= d e, C(n + d e, n).
+            var byTerms = Binomial(_monomials.Length - 1 + (long)exponent, _monomials.Length - 1);
+            var byMonomials = Binomial(Symbols.Count + degree, Symbols.Count);
+            var terms = BigInteger.Min(byTerms, byMonomials);
+            if (degree > limits.MaxTotalDegree || terms > limits.MaxTerms)
             {
-                shown = shown[..57] + "...";
+                throw new BeyondCapabilityException(
+                    $"({Shown()})^{exponent} would have total degree {degree} and up to {(terms > BigInteger.Pow(10, 15) ? "about 10^" + (int)BigInteger.Log10(terms) : terms.ToString("N0", System.Globalization.CultureInfo.InvariantCulture))} terms, " +
+                    $"beyond the limits ({limits}). Pass a larger PowerLimits to Pow(exponent, limits) to go on.");
             }
+        }
 
+        // Coefficient growth per factor: the bits beyond those of 1 (so powers of x, -x or i x cost nothing), plus
+        // log2 k for the multinomial coefficients (at most k^e) when there are k > 1 terms.
+        var extraBits = Math.Max(0, CoefficientSupport<T>.LargestBits(_coefficients) - CoefficientSupport<T>.OneBits);
+        var bits = exponent * (extraBits + (single ? 0 : Math.Log2(_monomials.Length)));
+        if (bits > limits.MaxCoefficientBits)
+        {
             throw new BeyondCapabilityException(
-                $"({shown})^{exponent} would have total degree {degree} and up to {(terms > BigInteger.Pow(10, 15) ? "about 10^" + (int)BigInteger.Log10(terms) : terms.ToString("N0", System.Globalization.CultureInfo.InvariantCulture))} terms, " +
+                $"({Shown()})^{exponent} would have coefficients of about {bits.ToString("G4", System.Globalization.CultureInfo.InvariantCulture)} bits, " +
                 $"beyond the limits ({limits}). Pass a larger PowerLimits to Pow(exponent, limits) to go on.");
         }
+
+        CheckDegreeFits(exponent, degree);
+    }
+
+    private void CheckDegreeFits(int exponent, long degree)
+    {
+        // Exponents and total degrees are ints (see Monomial); refused whatever the limits, never wrapped around.
+        if (degree > int.MaxValue)
+        {
+            throw new BeyondCapabilityException(
+                $"({Shown()})^{exponent} would have total degree {degree}, beyond the largest exponent and total degree a monomial holds ({int.MaxValue}).");
+        }
+    }
+
+    private string Shown()
+    {
+        var shown = ToString();
+        return shown.Length > 60 ? shown[..57] + "..." : shown;
     }
 
     private static BigInteger Binomial(long n, long k)

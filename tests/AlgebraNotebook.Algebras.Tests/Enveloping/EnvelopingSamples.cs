@@ -2,14 +2,14 @@ using AlgebraNotebook.Algebras;
 using AlgebraNotebook.Algebras.Enveloping;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Algebras.Tests.Enveloping;
 
 /// <summary>Algebras and representations shared by the enveloping-algebra tests.</summary>
 internal static class EnvelopingSamples
 {
-    internal static int Iterations =>
-        int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var m) && m > 0 ? m : 1;
+    internal static int Iterations => TestIterations.Multiplier;
 
     internal static Matrix<Rational> Unit(int size, int row, int column) =>
         Matrix<Rational>.FromFunction(size, size, (i, j) => i == row && j == column ? Rational.One : Rational.Zero);

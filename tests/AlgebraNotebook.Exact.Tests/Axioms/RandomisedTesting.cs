@@ -1,5 +1,6 @@
 using System.Numerics;
 using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Exact.Tests.Axioms;
 
@@ -10,17 +11,10 @@ public static class RandomisedTesting
     public const int Seed = 20261201;
 
     /// <summary>The multiplier read from ALGEBRANOTEBOOK_TEST_ITERATIONS (default 1, at least 1).</summary>
-    public static int Multiplier
-    {
-        get
-        {
-            var text = Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS");
-            return int.TryParse(text, out var value) && value > 0 ? value : 1;
-        }
-    }
+    public static int Multiplier => TestIterations.Multiplier;
 
     /// <summary>The number of iterations for a test whose base count is <paramref name="baseCount"/>.</summary>
-    public static int Iterations(int baseCount) => checked(baseCount * Multiplier);
+    public static int Iterations(int baseCount) => TestIterations.Times(baseCount);
 
     /// <summary>A fresh generator with the fixed seed (offset so different tests do not replay one stream).</summary>
     public static Random NewRandom(int offset = 0) => new(Seed + offset);

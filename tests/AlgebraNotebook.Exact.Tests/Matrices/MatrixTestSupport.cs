@@ -1,6 +1,6 @@
-using System.Globalization;
 using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Exact.Tests.Matrices;
 
@@ -8,14 +8,7 @@ namespace AlgebraNotebook.Exact.Tests.Matrices;
 internal static class MatrixTestSupport
 {
     /// <summary>The iteration multiplier from ALGEBRANOTEBOOK_TEST_ITERATIONS (default 1).</summary>
-    public static int Iterations
-    {
-        get
-        {
-            var text = Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS");
-            return int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var value) && value > 0 ? value : 1;
-        }
-    }
+    public static int Iterations => TestIterations.Multiplier;
 
     public static Matrix<Rational> RandomIntegerMatrix(Random random, int rows, int columns, int magnitude) =>
         Matrix<Rational>.FromFunction(rows, columns, (_, _) => random.Next(-magnitude, magnitude + 1));

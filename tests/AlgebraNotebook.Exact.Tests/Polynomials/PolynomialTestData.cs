@@ -1,6 +1,7 @@
 using AlgebraNotebook.Exact.Polynomials;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Exact.Symbols;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Exact.Tests.Polynomials;
 
@@ -14,12 +15,7 @@ internal static class PolynomialTestData
     public static Symbol S(string name) => Symbol.Of(name);
 
     /// <summary>Iteration multiplier from ALGEBRANOTEBOOK_TEST_ITERATIONS (default 1).</summary>
-    public static int Iterations(int baseCount)
-    {
-        var text = Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS");
-        var multiplier = int.TryParse(text, out var m) && m > 0 ? m : 1;
-        return baseCount * multiplier;
-    }
+    public static int Iterations(int baseCount) => TestIterations.Times(baseCount);
 
     public static Rational RandomRational(Random random) => new(random.Next(-4, 5), random.Next(1, 4));
 

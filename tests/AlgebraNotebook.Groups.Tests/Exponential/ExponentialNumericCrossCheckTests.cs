@@ -3,13 +3,13 @@ using AlgebraNotebook.Exact.Matrices;
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Groups.Exponential;
 using DenseComplex = MathNet.Numerics.LinearAlgebra.Complex.DenseMatrix;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Groups.Tests.Exponential;
 
 public class ExponentialNumericCrossCheckTests
 {
-    private static int Iterations =>
-        int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var k) && k > 0 ? k : 1;
+    private static int Iterations => TestIterations.Multiplier;
 
     // Reference: scaling and squaring with a Taylor polynomial in double precision (MathNet matrices), independent of the exact method.
     internal static MathNet.Numerics.LinearAlgebra.Matrix<Complex> ExpDouble(MathNet.Numerics.LinearAlgebra.Matrix<Complex> a)

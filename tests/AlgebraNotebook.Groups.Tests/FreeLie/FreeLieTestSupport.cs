@@ -1,5 +1,6 @@
 using AlgebraNotebook.Exact.Scalars;
 using AlgebraNotebook.Groups.FreeLie;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Groups.Tests.FreeLie;
 
@@ -10,12 +11,7 @@ public static class FreeLieTestSupport
     public const int Seed = 20261201;
 
     /// <summary>Base count times ALGEBRANOTEBOOK_TEST_ITERATIONS (default 1).</summary>
-    public static int Iterations(int baseCount)
-    {
-        var text = Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS");
-        var multiplier = int.TryParse(text, out var value) && value > 0 ? value : 1;
-        return checked(baseCount * multiplier);
-    }
+    public static int Iterations(int baseCount) => TestIterations.Times(baseCount);
 
     /// <summary>A random rational with small numerator and denominator (zero allowed).</summary>
     public static Rational SmallRational(Random random) => new(random.Next(-9, 10), random.Next(1, 7));

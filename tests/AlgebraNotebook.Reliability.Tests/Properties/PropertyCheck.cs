@@ -1,4 +1,5 @@
 using CsCheck;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Reliability.Tests.Properties;
 
@@ -13,11 +14,10 @@ public static class PropertyCheck
     public const ulong Seed = 20261201;
 
     /// <summary>The multiplier read from ALGEBRANOTEBOOK_TEST_ITERATIONS (default 1, at least 1).</summary>
-    public static int Multiplier =>
-        int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var value) && value > 0 ? value : 1;
+    public static int Multiplier => TestIterations.Multiplier;
 
     /// <summary>The number of iterations for a property whose base count is <paramref name="baseCount"/>.</summary>
-    public static int Iterations(int baseCount) => checked(baseCount * Multiplier);
+    public static int Iterations(int baseCount) => TestIterations.Times(baseCount);
 
     /// <summary>
     /// Checks <paramref name="property"/> on <see cref="Iterations"/>(<paramref name="baseIterations"/>) values of

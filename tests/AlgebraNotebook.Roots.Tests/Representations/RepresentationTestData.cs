@@ -1,4 +1,5 @@
 using AlgebraNotebook.Roots.Representations;
+using AlgebraNotebook.TestSupport;
 
 namespace AlgebraNotebook.Roots.Tests.Representations;
 
@@ -6,6 +7,5 @@ internal static class RepresentationTestData
 {
     public static IrreducibleRepresentation Irrep(string type, params int[] labels) => IrreducibleRepresentation.Of(RootSystem.Of(type), labels);
 
-    public static int Iterations =>
-        int.TryParse(Environment.GetEnvironmentVariable("ALGEBRANOTEBOOK_TEST_ITERATIONS"), out var n) && n > 0 ? n : 1;
+    public static int Iterations => TestIterations.Multiplier;
 }
