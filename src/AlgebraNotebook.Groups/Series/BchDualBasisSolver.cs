@@ -103,8 +103,7 @@ internal static class BchDualBasisSolver
         var crt = new Garner(primes);
         // 128-bit reconstruction when |D_n c_l| < 2^127 is proved (bitsNeeded counts the sign bit).
         var narrow = bitsNeeded <= 127;
-        var result = Assemble(plan, first.Coefficients, second?.Coefficients, primes, scales, crt, narrow, parallelism, (n, code) => ToLyndonWord(code, n, smallLetter, largeLetter), !firstIsSmall);
-        return result;
+        return Assemble(plan, first.Coefficients, second?.Coefficients, primes, scales, crt, narrow, parallelism, (n, code) => ToLyndonWord(code, n, smallLetter, largeLetter), !firstIsSmall);
     }
 
     // The non-zero coefficients in order (degree, then word), in chunks of words shared among the threads.
