@@ -35,8 +35,9 @@ namespace AlgebraNotebook.Groups.Series;
 /// <para>
 /// Exactness. c_l has a denominator dividing D_n = n! lcm(1..n) (n = |l|): the word coefficients of Z of degree n
 /// have such denominators, and the Lyndon coordinates follow from them by a unit triangular integer system (see
-/// <see cref="BchLyndonRowSolver"/>). The pass runs modulo four primes near 2^26 (eight when needed), and a second
-/// pass on absolute values (<see cref="MagnitudeBound"/>) bounds |c_l|; the Chinese remainder theorem then gives the
+/// <see cref="BchLyndonRowSolver"/>). The pass runs modulo four primes near 2^26 (eight when needed), and the same
+/// recurrences over classes of words, in absolute values (<see cref="DualBasisBound"/>), bound |c_l|; the Chinese
+/// remainder theorem then gives the
 /// integer D_n c_l, proved unique because twice the bound on |D_n c_l| is below the product of the primes.
 /// </para>
 /// <para>
@@ -103,7 +104,7 @@ internal static class BchDualBasisSolver
         var crt = new Garner(primes);
         // 128-bit reconstruction when |D_n c_l| < 2^127 is proved (bitsNeeded counts the sign bit).
         var narrow = bitsNeeded <= 127;
-        return Assemble(plan, first.Coefficients, second?.Coefficients, primes, scales, crt, narrow, parallelism, (n, code) => ToLyndonWord(code, n, smallLetter, largeLetter), !firstIsSmall);
+        return Assemble(plan, first.Coefficients, second?.Coefficients, primes, scales, crt, narrow, parallelism, smallLetter, largeLetter, !firstIsSmall);
     }
 
     // The non-zero coefficients in order (degree, then word), in chunks of words shared among the threads.
@@ -116,7 +117,8 @@ internal static class BchDualBasisSolver
         Garner crt,
         bool narrow,
         int parallelism,
-        Func<int, int, LyndonWord> word,
+        int smallLetter,
+        int largeLetter,
         bool largeFirst)
     {
         const int ChunkSize = 2048;
@@ -183,7 +185,7 @@ internal static class BchDualBasisSolver
                     coefficient = new Rational(negate ? -value : value, scales[n]);
                 }
 
-                result[at++] = (word(n, words[r]), coefficient);
+                result[at++] = (ToLyndonWord(words[r], n, smallLetter, largeLetter), coefficient);
             }
         }
 

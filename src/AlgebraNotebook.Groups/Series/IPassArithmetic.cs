@@ -3,9 +3,9 @@ using AlgebraNotebook.Exact.Scalars;
 namespace AlgebraNotebook.Groups.Series;
 
 /// <summary>
-/// The arithmetic one pass of <see cref="DualBasisPass{T}"/> runs in: residues of rationals modulo a few primes
-/// (<see cref="ResidueQuad{TPrimes}"/>), or upper bounds on absolute values (<see cref="MagnitudeBound"/>). The pass
-/// only adds and multiplies, so the same code computes either.
+/// The arithmetic the table operations of <see cref="PairingTables{T}"/> run in: residues of rationals modulo a few
+/// primes (<see cref="ResidueQuad{TPrimes}"/>), or upper bounds on absolute values (<see cref="MagnitudeBound"/>). They
+/// only multiply and add, so the same code computes either.
 /// </summary>
 internal interface IPassArithmetic<T>
     where T : struct, IPassArithmetic<T>
@@ -15,9 +15,6 @@ internal interface IPassArithmetic<T>
 
     /// <summary>The image of a rational constant of the pass (its denominator has only primes below 2^30).</summary>
     static abstract T FromRational(Rational value);
-
-    /// <summary>The image of a + b.</summary>
-    static abstract T Add(T a, T b);
 
     /// <summary>The image of a b.</summary>
     static abstract T Multiply(T a, T b);

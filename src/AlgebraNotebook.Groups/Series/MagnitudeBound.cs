@@ -32,9 +32,6 @@ internal readonly struct MagnitudeBound : IPassArithmetic<MagnitudeBound>
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static MagnitudeBound Add(MagnitudeBound a, MagnitudeBound b) => new(a.Value + b.Value);
-
-    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static MagnitudeBound Multiply(MagnitudeBound a, MagnitudeBound b) => new(a.Value * b.Value);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]

@@ -90,6 +90,7 @@ internal readonly struct ResidueQuad<TPrimes> : IPassArithmetic<ResidueQuad<TPri
     public static ResidueQuad<TPrimes> FromRational(Rational value) =>
         new(Vector128.Create(Reduce(value, TPrimes.P0), Reduce(value, TPrimes.P1), Reduce(value, TPrimes.P2), Reduce(value, TPrimes.P3)));
 
+    /// <summary>The residues of a + b (the tables only multiply and add in one step; this one is for building values).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static ResidueQuad<TPrimes> Add(ResidueQuad<TPrimes> a, ResidueQuad<TPrimes> b)
     {
